@@ -1,0 +1,273 @@
+"""The Bratteli diagram over any tower.
+
+Multiplicities by path counting (Bratteli, *Inductive limits of finite dimensional
+C*-algebras*, Trans. AMS 171, 1972; Goodman, de la Harpe, Jones, *Coxeter Graphs and Towers of
+Algebras*, 1989, ch. 2): m(root) = 1 and m(child) = Σ_parents m(parent)·edges.  The number of
+paths to a node is the multiplicity of the group's irreducible module in the tensor space and
+the dimension of the centralizer's irreducible module, so at every level
+Σ m·dim = dim of the tensor space and Σ m² = dim of the centralizer (double centralizer theorem).
+
+Levels are built lazily, once, and kept.  Long work reports progress through a callable and
+stops when a cancel token (anything with ``is_set()``, e.g. ``threading.Event``) is set.
+"""
+
+from __future__ import annotations
+
+import threading
+from dataclasses import dataclass
+from typing import Callable, Hashable, Protocol
+
+from engine.errors import Cancelled, TooLarge
+from engine.tower import Edge, Node, Tower
+
+#: default size guard: refuse builds estimated to walk more edges than this
+DEFAULT_EDGE_LIMIT = 50_000_000
+
+Progress = Callable[[float, float], None]
+
+
+class CancelToken(Protocol):
+    def is_set(self) -> bool: ...
+
+
+@dataclass(frozen=True)
+class LevelSums:
+    """Σm, Σm² and Σm·dim of one level, beside what the tower says they should be."""
+
+    multiplicities: int
+    squares: int
+    weighted: int
+    tensor_dimension: int
+    generic_dimension: int | None
+
+    @property
+    def consistent(self) -> bool:
+        """Σ m·dim equals the dimension of the tensor space."""
+        return self.weighted == self.tensor_dimension
+
+    @property
+    def faithful(self) -> bool | None:
+        """Whether the diagram algebra maps injectively (Σm² equals its dimension); None if unknown."""
+        if self.generic_dimension is None:
+            return None
+        return self.squares == self.generic_dimension
+
+
+_CHECK_EVERY = 2048
+
+
+class Diagram:
+    """Levels of a tower as mappings node → multiplicity (exact ints), built on demand."""
+
+    def __init__(self, tower: Tower, edge_limit: int = DEFAULT_EDGE_LIMIT) -> None:
+        self.tower = tower
+        self.edge_limit = edge_limit
+        root = tower.root()
+        # Nodes are numbered as they are first met; levels and the edge cache work on the numbers
+        # (small-int keys hash and compare faster than tuples), the public view maps them back.
+        self._ids: dict[Node, int] = {root: 0}
+        self._node_of: list[Node] = [root]
+        self._levels: list[dict[int, int]] = [{0: 1}]
+        self._public: dict[int, dict[Node, int]] = {}
+        self._children: dict[Hashable, dict[int, tuple[tuple[int, ...], tuple[int, ...] | None]]] = {}
+        self._sorted: dict[int, list[Node]] = {}
+        self._sums: dict[int, LevelSums] = {}
+        self._reverse: dict[int, dict[Node, list[Edge]]] = {}
+        self._lock = threading.RLock()
+        self._id_lock = threading.Lock()
+
+    # ----- building -------------------------------------------------------------------------
+    @property
+    def built(self) -> int:
+        """Index of the deepest level built so far."""
+        return len(self._levels) - 1
+
+    def estimate(self, index: int) -> int | None:
+        """The tower's estimate of the edges walked to build levels 0..index."""
+        return self.tower.estimate_edges(index)
+
+    def check_size(self, index: int) -> None:
+        """Raise TooLarge when building up to ``index`` is estimated to exceed the edge limit."""
+        if index <= self.built:
+            return
+        estimate = self.tower.estimate_edges(index)
+        if estimate is not None and estimate > self.edge_limit:
+            from engine.levels import format_level
+
+            raise TooLarge(
+                f"building {self.tower.spec} to level {format_level(self.tower.level_of(index))} "
+                f"would walk about {estimate:.2e} edges, over the limit of {self.edge_limit:.0e}; "
+                "ask for a lower level, or for one node (the node command uses a closed form where "
+                "the family has one)"
+            )
+
+    def ensure(self, index: int, progress: Progress | None = None, cancel: CancelToken | None = None) -> None:
+        """Build every level up to ``index`` (raises TooLarge before starting, Cancelled midway)."""
+        self.tower.check_index(index)
+        if index <= self.built:
+            return
+        self.check_size(index)
+        with self._lock:
+            start = self.built
+            span = index - start
+            while self.built < index:
+                done_before = self.built - start
+                self._build_next(
+                    None if progress is None else (lambda f, d=done_before: progress(d + f, span)),
+                    cancel,
+                )
+            if progress is not None:
+                progress(span, span)
+
+    def _step(self, index: int, node: Node) -> tuple[tuple[int, ...], tuple[int, ...] | None]:
+        cache = self._children.setdefault(self.tower.step_key(index), {})
+        with self._id_lock:
+            ident = self._id(node)
+        found = cache.get(ident)
+        if found is None:
+            found = cache[ident] = self._compute_step(index, ident)
+        return found
+
+    def _id(self, node: Node) -> int:
+        """The number of a node (call with ``_id_lock`` held when it may be new)."""
+        ident = self._ids.get(node)
+        if ident is None:
+            ident = self._ids[node] = len(self._node_of)
+            self._node_of.append(node)
+        return ident
+
+    def _compute_step(self, index: int, ident: int) -> tuple[tuple[int, ...], tuple[int, ...] | None]:
+        pairs = self.tower.children(index, self._node_of[ident])
+        number = self._id
+        with self._id_lock:  # the UI thread may number nodes while a worker builds
+            kids = tuple([number(child) for child, _ in pairs])
+        counts = tuple([edges for _, edges in pairs])
+        if counts.count(1) == len(counts):
+            return kids, None
+        return kids, counts
+
+    def _build_next(self, progress: Callable[[float], None] | None, cancel: CancelToken | None) -> None:
+        index = self.built
+        if self.tower.max_index is not None and index >= self.tower.max_index:
+            raise IndexError("past the last level")
+        prev = self._levels[index]
+        cache = self._children.setdefault(self.tower.step_key(index), {})
+        compute = self._compute_step
+        new: dict[int, int] = {}
+        get = new.get
+        total = len(prev)
+        count = 0
+        for node, m in prev.items():
+            step = cache.get(node)
+            if step is None:
+                step = cache[node] = compute(index, node)
+            kids, counts = step
+            if counts is None:
+                for child in kids:
+                    new[child] = get(child, 0) + m
+            else:
+                for child, e in zip(kids, counts):
+                    new[child] = get(child, 0) + m * e
+            count += 1
+            if count % _CHECK_EVERY == 0:
+                if cancel is not None and cancel.is_set():
+                    raise Cancelled()
+                if progress is not None:
+                    progress(count / total)
+        if cancel is not None and cancel.is_set():
+            raise Cancelled()
+        self._levels.append(new)
+
+    # ----- reading --------------------------------------------------------------------------
+    def level(self, index: int, progress: Progress | None = None, cancel: CancelToken | None = None) -> dict[Node, int]:
+        """node → multiplicity on level ``index`` (exactly the nodes with a path)."""
+        self.ensure(index, progress, cancel)
+        found = self._public.get(index)
+        if found is None:
+            node_of = self._node_of
+            found = self._public[index] = {node_of[i]: m for i, m in self._levels[index].items()}
+        return found
+
+    def nodes(self, index: int) -> list[Node]:
+        """The nodes of a level in the tower's display order."""
+        found = self._sorted.get(index)
+        if found is None:
+            found = sorted(self.level(index), key=self.tower.sort_key)
+            self._sorted[index] = found
+        return found
+
+    def multiplicity(self, index: int, node: Node) -> int:
+        """Paths from the root to ``node``; a closed form where the family has one and the level is
+        not built yet."""
+        self.tower.check_index(index)
+        if index <= self.built:
+            ident = self._ids.get(node)
+            return 0 if ident is None else self._levels[index].get(ident, 0)
+        closed = self.tower.multiplicity(index, node)
+        if closed is not None:
+            return closed
+        return self.level(index).get(node, 0)
+
+    def has_node(self, index: int, node: Node) -> bool:
+        return self.multiplicity(index, node) > 0
+
+    def children(self, index: int, node: Node) -> list[Edge]:
+        """Nodes of the next level joined to ``node``, with edge counts (empty at the last level)."""
+        if self.tower.max_index is not None and index >= self.tower.max_index:
+            return []
+        kids, counts = self._step(index, node)
+        node_of = self._node_of
+        if counts is None:
+            return [(node_of[k], 1) for k in kids]
+        return [(node_of[k], e) for k, e in zip(kids, counts)]
+
+    def parents(self, index: int, node: Node) -> list[Edge]:
+        """Nodes of the previous level (with a path) joined to ``node``, with edge counts."""
+        if index == 0:
+            return []
+        candidates = self.tower.parents(index, node)
+        if candidates is not None:
+            if index - 1 <= self.built:
+                prev = self.level(index - 1)
+                found = [(p, e) for p, e in candidates if p in prev]
+            else:
+                found = [(p, e) for p, e in candidates if self.multiplicity(index - 1, p) > 0]
+            return sorted(found, key=lambda pe: self.tower.sort_key(pe[0]))
+        reverse = self._reverse.get(index)
+        if reverse is None:
+            reverse = {}
+            for p in self.nodes(index - 1):
+                for child, e in self.children(index - 1, p):
+                    reverse.setdefault(child, []).append((p, e))
+            self._reverse[index] = reverse
+        return list(reverse.get(node, []))
+
+    def sums(self, index: int, progress: Progress | None = None, cancel: CancelToken | None = None) -> LevelSums:
+        found = self._sums.get(index)
+        if found is not None:
+            return found
+        level = self.level(index, progress, cancel)
+        total = squares = weighted = 0
+        dim = self.tower.dimension
+        for count, (node, m) in enumerate(level.items(), 1):
+            total += m
+            squares += m * m
+            weighted += m * dim(index, node)
+            if count % _CHECK_EVERY == 0 and cancel is not None and cancel.is_set():
+                raise Cancelled()
+        found = LevelSums(
+            total, squares, weighted, self.tower.tensor_dimension(index), self.tower.generic_dimension(index)
+        )
+        self._sums[index] = found
+        return found
+
+    def first_unfaithful(self, upto: int, cancel: CancelToken | None = None) -> int | None:
+        """The first level index ≤ upto where Σm² falls below the generic dimension (there the
+        diagram algebra stops acting faithfully), or None."""
+        for index in range(upto + 1):
+            if self.tower.generic_dimension(index) is None:
+                return None
+            if not self.sums(index, cancel=cancel).faithful:
+                return index
+        return None
+

@@ -1,0 +1,183 @@
+"""``symmetric:n=N``: S_N on its permutation module V = C^N; centralizers: partition algebras.
+
+Levels 0, 1/2, 1, 3/2, ...: level k holds the partitions λ of N with N − λ_1 ≤ k (irreducible
+S_N-modules in V^{⊗k}); level k+1/2 holds the partitions μ of N−1 with (N−1) − μ_1 ≤ k
+(V^{⊗k} restricted to S_{N−1}).  k → k+1/2 removes a box (restriction), k+1/2 → k+1 adds one
+(induction), since V = Ind_{S_{N−1}}^{S_N} 1 (Jones, *The Potts model and the symmetric group*,
+1994; Halverson and Ram, *Partition algebras*, European J. Combin. 26, 2005, §3).
+
+Dimensions: f^λ by the hook length formula.  Tensor dimension N^k at k and at k+1/2.  Generic
+dimension: the partition algebra P_k(N) has dimension Bell(2k), P_{k+1/2}(N) has Bell(2k+1)
+(OEIS A000110); the centralizer dimension is Σ_{j≤N} S(2k, j), equal to Bell(2k) iff 2k ≤ N.
+"""
+
+from __future__ import annotations
+
+from math import isqrt
+from typing import Sequence
+
+from engine.combinatorics import bell, stirling2_row
+from engine.errors import SpecError
+from engine.partitions import (
+    Partition,
+    PartitionError,
+    format_partition,
+    parse_partition,
+    partition_count,
+    larger_by_one_box,
+    skew_tableaux_count,
+    smaller_by_one_box,
+    standard_tableaux_count,
+)
+from engine.specs import Family, choice_param, int_param
+from engine.tower import Edge, Tower
+
+
+class SymmetricTower(Tower):
+    family = "symmetric"
+
+    def __init__(self, spec: str, n: int, halves: bool = True) -> None:
+        super().__init__(spec)
+        self.n = n
+        self.halves = halves
+        self.steps_per_unit = 2 if halves else 1
+
+    # ----- levels ---------------------------------------------------------------------------
+    def _is_half(self, index: int) -> bool:
+        return self.halves and index % 2 == 1
+
+    def _k(self, index: int) -> int:
+        """The integer part k of the level (index 2k or 2k+1 with halves)."""
+        return index // 2 if self.halves else index
+
+    def step_key(self, index: int) -> int:
+        return index % 2 if self.halves else 0
+
+    def level_kind(self, index: int) -> str:
+        return f"S_{self.n - 1}" if self._is_half(index) else f"S_{self.n}"
+
+    # ----- graph ----------------------------------------------------------------------------
+    def root(self) -> Partition:
+        return (self.n,)
+
+    def children(self, index: int, node: Partition) -> Sequence[Edge]:
+        if not self.halves:
+            return self._restrict_induce(node)
+        if index % 2 == 0:
+            return [(mu, 1) for mu in smaller_by_one_box(node)]
+        return [(lam, 1) for lam in larger_by_one_box(node)]
+
+    def parents(self, index: int, node: Partition) -> Sequence[Edge]:
+        if index == 0:
+            return []
+        if not self.halves:
+            return self._restrict_induce(node)
+        if index % 2 == 1:  # a half level: parents at the integer level below have one box more
+            return [(lam, 1) for lam in larger_by_one_box(node)]
+        return [(mu, 1) for mu in smaller_by_one_box(node)]
+
+    @staticmethod
+    def _restrict_induce(node: Partition) -> list[Edge]:
+        """Edges of one whole step λ → ν through the hidden half level: the number of μ with
+        μ ⊂ λ and μ ⊂ ν, one box smaller."""
+        counts: dict[Partition, int] = {}
+        for mu in smaller_by_one_box(node):
+            for nu in larger_by_one_box(mu):
+                counts[nu] = counts.get(nu, 0) + 1
+        return list(counts.items())
+
+    # ----- numbers --------------------------------------------------------------------------
+    def dimension(self, index: int, node: Partition) -> int:
+        return standard_tableaux_count(node)
+
+    def tensor_dimension(self, index: int) -> int:
+        return self.n ** self._k(index)
+
+    def generic_dimension(self, index: int) -> int:
+        """Bell(2k) at level k, Bell(2k+1) at k+1/2 (dimension of P_k(N), OEIS A000110)."""
+        k = self._k(index)
+        return bell(2 * k + 1) if self._is_half(index) else bell(2 * k)
+
+    def algebra_name(self, index: int) -> str:
+        k = self._k(index)
+        return f"P_{k}+1/2({self.n})" if self._is_half(index) else f"P_{k}({self.n})"
+
+    def reachable(self, index: int, node: Partition) -> bool:
+        k = self._k(index)
+        top = self.n - 1 if self._is_half(index) else self.n
+        return sum(node) == top and top - (node[0] if node else 0) <= k
+
+    def multiplicity(self, index: int, node: Partition) -> int:
+        """Closed form, no path counting.
+
+        V^{⊗k} ≅ ⊕_t S(k,t) · Ind_{S_{N−t}}^{S_N} 1 (orbits of S_N on [N]^k are set partitions of
+        [k] into t ≤ N blocks; Halverson and Ram 2005, §3), and Ind_{S_{N−t}}^{S_N} 1 contains S^λ
+        f^{λ/(N−t)} times (Pieri rule; Macdonald I.5).  Hence m_λ(k) = Σ_t S(k,t)·f^{λ/(N−t)}; at
+        k+1/2, restricting to S_{N−1}: m_μ(k+1/2) = Σ_t S(k+1,t+1)·f^{μ/(N−1−t)}.
+        """
+        if not self.reachable(index, node):
+            return 0
+        k = self._k(index)
+        if self._is_half(index):
+            top = self.n - 1
+            row = stirling2_row(k + 1, top + 1)
+            return sum(row[t + 1] * skew_tableaux_count(node, (top - t,) if top - t else ()) for t in range(top + 1))
+        row = stirling2_row(k, self.n)
+        return sum(row[t] * skew_tableaux_count(node, (self.n - t,) if self.n - t else ()) for t in range(self.n + 1))
+
+    def level_size(self, index: int) -> int:
+        """Number of nodes with a path on a level: partitions (top−j, ν) with ν ⊢ j, ν_1 ≤ top−j."""
+        top = self.n - 1 if self._is_half(index) else self.n
+        k = self._k(index)
+        return sum(partition_count(j, max_part=top - j) for j in range(min(k, top) + 1) if top - j >= 0)
+
+    def estimate_edges(self, upto: int) -> int:
+        """Nodes per level times a bound on corners (a partition of N has at most √(2N)+1)."""
+        corners = isqrt(2 * self.n) + 2
+        if not self.halves:
+            corners = corners * corners
+        total = 0
+        stable_from = 2 * self.n + 2 if self.halves else self.n + 1
+        for index in range(min(upto, stable_from) + 1):
+            total += self.level_size(index) * corners
+        if upto > stable_from:
+            total += (upto - stable_from) * max(self.level_size(stable_from), self.level_size(stable_from - 1)) * corners
+        return total
+
+    # ----- labels ---------------------------------------------------------------------------
+    def format(self, node: Partition) -> str:
+        return format_partition(node)
+
+    def parse(self, text: str, index: int) -> Partition:
+        top = self.n - 1 if self._is_half(index) else self.n
+        expected = f"a partition of {top}, e.g. {format_partition((top - 1, 1) if top > 1 else (top,) if top else ())}"
+        try:
+            node = parse_partition(text)
+        except PartitionError as exc:
+            raise self.label_error(text, index, expected) from exc
+        if sum(node) != top:
+            raise self.label_error(text, index, expected)
+        return node
+
+    def sort_key(self, node: Partition) -> tuple[int, ...]:
+        return tuple(-x for x in node)
+
+
+def _build(spec: str, params: dict[str, str]) -> SymmetricTower:
+    n = int_param("symmetric", params, "n", minimum=1)
+    halves = choice_param("symmetric", params, "halves", ("yes", "no"), "yes") == "yes"
+    if n > 400:
+        raise SpecError(f"symmetric: n={n} is too large (at most 400)")
+    return SymmetricTower(spec, n, halves)
+
+
+FAMILY = Family(
+    name="symmetric",
+    summary="S_N on its permutation module C^N; centralizers: partition algebras P_k(N), half levels S_{N-1}",
+    keys={"n": "N, the degree (N ≥ 1)", "halves": "yes (default) or no: hide the half levels"},
+    build=_build,
+    required=("n",),
+    rank=10,
+    example="symmetric:n=4",
+)
+

@@ -1,0 +1,138 @@
+"""Tower specs: ``FAMILY`` or ``FAMILY:key=value,key=value`` → a Tower.
+
+Families register themselves: every module in ``engine/families/`` that defines ``FAMILY``
+(a ``Family``) is a family.  Adding a family is adding a module; nothing here changes.
+A comma inside parentheses belongs to the value (``module=(5,1)``).
+"""
+
+from __future__ import annotations
+
+import importlib
+import pkgutil
+from dataclasses import dataclass, field
+from typing import Callable
+
+from engine.errors import SpecError
+from engine.tower import Tower
+
+
+@dataclass(frozen=True)
+class Family:
+    name: str
+    summary: str
+    #: key → one-line help; keys not listed are refused
+    keys: dict[str, str]
+    build: Callable[[str, dict[str, str]], Tower]
+    #: keys that must be given
+    required: tuple[str, ...] = ()
+    #: position in listings
+    rank: int = 100
+    example: str = ""
+    aliases: tuple[str, ...] = field(default_factory=tuple)
+
+
+_REGISTRY: dict[str, Family] | None = None
+
+
+def families() -> dict[str, Family]:
+    """name → Family, discovered from engine/families/, in listing order."""
+    global _REGISTRY
+    if _REGISTRY is None:
+        import engine.families as package
+
+        found: list[Family] = []
+        for info in pkgutil.iter_modules(package.__path__):
+            module = importlib.import_module(f"engine.families.{info.name}")
+            family = getattr(module, "FAMILY", None)
+            if isinstance(family, Family):
+                found.append(family)
+        found.sort(key=lambda f: (f.rank, f.name))
+        _REGISTRY = {f.name: f for f in found}
+    return _REGISTRY
+
+
+def split_spec(spec: str) -> tuple[str, dict[str, str]]:
+    """``family:k=v,k=v`` → (family, {k: v}); commas inside parentheses stay in the value."""
+    text = spec.strip()
+    if not text:
+        raise SpecError("empty tower spec (write FAMILY or FAMILY:key=value,...; see `towerscope families`)")
+    name, _, rest = text.partition(":")
+    name = name.strip()
+    params: dict[str, str] = {}
+    if rest.strip():
+        for item in _split_top_level(rest):
+            key, eq, value = item.partition("=")
+            key = key.strip()
+            if not eq or not key:
+                raise SpecError(f"in spec {spec!r}: {item.strip()!r} is not key=value")
+            if key in params:
+                raise SpecError(f"in spec {spec!r}: key {key!r} given twice")
+            params[key] = value.strip()
+    return name, params
+
+
+def _split_top_level(text: str) -> list[str]:
+    items: list[str] = []
+    depth = 0
+    current: list[str] = []
+    for ch in text:
+        if ch in "([":
+            depth += 1
+        elif ch in ")]":
+            depth -= 1
+            if depth < 0:
+                raise SpecError(f"unbalanced parentheses in {text!r}")
+        if ch == "," and depth == 0:
+            items.append("".join(current))
+            current = []
+        else:
+            current.append(ch)
+    if depth != 0:
+        raise SpecError(f"unbalanced parentheses in {text!r}")
+    items.append("".join(current))
+    return [i for i in items if i.strip()]
+
+
+def parse_spec(spec: str) -> Tower:
+    """Build the tower a spec names; SpecError with a one-line message otherwise."""
+    name, params = split_spec(spec)
+    registry = families()
+    family = registry.get(name)
+    if family is None:
+        for candidate in registry.values():
+            if name in candidate.aliases:
+                family = candidate
+                break
+    if family is None:
+        raise SpecError(f"unknown tower family {name!r} (known: {', '.join(registry)})")
+    for key in params:
+        if key not in family.keys:
+            accepted = ", ".join(family.keys) or "none"
+            raise SpecError(f"{family.name}: unknown key {key!r} (accepted keys: {accepted})")
+    for key in family.required:
+        if key not in params:
+            raise SpecError(f"{family.name}: key {key!r} is required ({family.keys[key]})")
+    canonical = family.name + (":" + ",".join(f"{k}={v}" for k, v in params.items()) if params else "")
+    return family.build(canonical, params)
+
+
+def int_param(family: str, params: dict[str, str], key: str, *, minimum: int = 0, default: int | None = None) -> int:
+    """A whole-number value of a spec key, at least ``minimum``; a SpecError naming the key otherwise."""
+    raw = params.get(key)
+    if raw is None:
+        if default is None:
+            raise SpecError(f"{family}: key {key!r} is required")
+        return default
+    if not raw.isdigit():
+        raise SpecError(f"{family}: key {key!r} must be a whole number, got {raw!r}")
+    value = int(raw)
+    if value < minimum:
+        raise SpecError(f"{family}: key {key!r} must be at least {minimum}, got {value}")
+    return value
+
+
+def choice_param(family: str, params: dict[str, str], key: str, choices: tuple[str, ...], default: str) -> str:
+    raw = params.get(key, default)
+    if raw not in choices:
+        raise SpecError(f"{family}: key {key!r} must be one of {', '.join(choices)}, got {raw!r}")
+    return raw

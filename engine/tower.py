@@ -1,0 +1,137 @@
+"""The one protocol every family implements.
+
+A tower is a graded graph: level 0 holds the root (the trivial module); the edges from
+level i to level i+1 say how each irreducible module at level i decomposes after one step
+(tensoring with V, or restricting to / inducing from a subgroup at half levels).
+
+Levels are addressed by a step *index* 0, 1, 2, ...; ``level_of(index)`` gives the level
+value (``index / steps_per_unit``: 0, 1/2, 1, ... for towers with half levels).
+
+Contract for implementers (held by tests/engine/test_tower_contract.py):
+- ``children(index, node)`` lists each child once with its positive edge count, and depends
+  only on ``(step_key(index), node)``, so the diagram may cache it;
+- every child of a node with a path has a path (the diagram keeps exactly the reached nodes);
+- Σ over children of edges·dim(child) = (dim of the step) · dim(node), so that
+  Σ_level m·dim = tensor_dimension(index);
+- nodes are hashable and ``parse(format(node), index) == node``.
+"""
+
+from __future__ import annotations
+
+from abc import ABC, abstractmethod
+from fractions import Fraction
+from typing import Hashable, Sequence
+
+from engine.errors import LabelError
+
+Node = Hashable
+Edge = tuple[Node, int]
+
+
+class Tower(ABC):
+    """Base class of all towers; subclasses fill in the abstract methods."""
+
+    #: the family name, as in specs (``symmetric``)
+    family: str = ""
+    #: 2 for towers with half levels (index 1 is level 1/2), else 1
+    steps_per_unit: int = 1
+    #: index of the last level, or None for an infinite tower
+    max_index: int | None = None
+
+    def __init__(self, spec: str) -> None:
+        self.spec = spec
+
+    # ----- levels -------------------------------------------------------------------------
+    def level_of(self, index: int) -> Fraction:
+        return Fraction(index, self.steps_per_unit)
+
+    def index_of(self, level: Fraction) -> int:
+        """The step index of a level value; a UserError when the tower has no such level."""
+        from engine.errors import UserError
+        from engine.levels import format_level
+
+        scaled = level * self.steps_per_unit
+        if scaled.denominator != 1:
+            kind = "integer and half levels" if self.steps_per_unit == 2 else "integer levels only"
+            raise UserError(f"{self.spec} has no level {format_level(level)} (it has {kind})")
+        index = int(scaled)
+        if self.max_index is not None and index > self.max_index:
+            raise UserError(
+                f"level {format_level(level)} is past the end of {self.spec} "
+                f"(its last level is {format_level(self.level_of(self.max_index))})"
+            )
+        return index
+
+    def check_index(self, index: int) -> None:
+        if index < 0 or (self.max_index is not None and index > self.max_index):
+            self.index_of(self.level_of(index))
+
+    def step_key(self, index: int) -> Hashable:
+        """children(index, node) depends only on (step_key(index), node)."""
+        return index
+
+    def level_kind(self, index: int) -> str:
+        """A short word for the group acting at this level (e.g. ``S_4`` or ``S_3``)."""
+        return ""
+
+    # ----- graph ----------------------------------------------------------------------------
+    @abstractmethod
+    def root(self) -> Node:
+        """The node at level 0: the trivial module."""
+
+    @abstractmethod
+    def children(self, index: int, node: Node) -> Sequence[Edge]:
+        """Nodes of level index+1 joined to ``node`` (at level ``index``), with edge counts."""
+
+    def parents(self, index: int, node: Node) -> Sequence[Edge] | None:
+        """Candidates at level index−1 joined to ``node``, with edge counts, or None when the
+        family cannot say without the previous level (the diagram then inverts ``children``).
+        Candidates may include nodes without a path; the diagram filters them."""
+        return None
+
+    # ----- numbers --------------------------------------------------------------------------
+    @abstractmethod
+    def dimension(self, index: int, node: Node) -> int:
+        """Dimension of the group's (or subgroup's, at half levels) irreducible module."""
+
+    @abstractmethod
+    def tensor_dimension(self, index: int) -> int:
+        """Dimension of the tensor space at this level ((dim V)^k)."""
+
+    def generic_dimension(self, index: int) -> int | None:
+        """Dimension of the diagram algebra that maps onto the centralizer, or None."""
+        return None
+
+    def algebra_name(self, index: int) -> str | None:
+        """Name of that diagram algebra at this level, e.g. ``P_3(4)``."""
+        return None
+
+    def multiplicity(self, index: int, node: Node) -> int | None:
+        """A closed form for the number of paths to ``node``, or None when the family has none.
+        Must return 0 for nodes without a path."""
+        return None
+
+    def estimate_edges(self, upto: int) -> int | None:
+        """An upper estimate of the edges walked to build levels 0..upto, or None if small."""
+        return None
+
+    # ----- labels ---------------------------------------------------------------------------
+    @abstractmethod
+    def format(self, node: Node) -> str:
+        """The label of a node, as in the CLI contract."""
+
+    @abstractmethod
+    def parse(self, text: str, index: int) -> Node:
+        """The node at level ``index`` whose label is ``text``; LabelError when there is none."""
+
+    def sort_key(self, node: Node) -> object:
+        """Order of nodes within a level."""
+        return node
+
+    def label_error(self, text: str, index: int, expected: str) -> LabelError:
+        from engine.levels import format_level
+
+        return LabelError(
+            f"{text!r} is not a node of {self.spec} at level {format_level(self.level_of(index))} "
+            f"(expected {expected})"
+        )
