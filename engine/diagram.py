@@ -192,7 +192,8 @@ class Diagram:
         """The nodes of a level in the tower's display order."""
         found = self._sorted.get(index)
         if found is None:
-            found = sorted(self.level(index), key=self.tower.sort_key)
+            key = self.tower.sort_key
+            found = sorted(self.level(index), key=lambda node: key(node, index))
             self._sorted[index] = found
         return found
 
@@ -232,7 +233,7 @@ class Diagram:
                 found = [(p, e) for p, e in candidates if p in prev]
             else:
                 found = [(p, e) for p, e in candidates if self.multiplicity(index - 1, p) > 0]
-            return sorted(found, key=lambda pe: self.tower.sort_key(pe[0]))
+            return sorted(found, key=lambda pe: self.tower.sort_key(pe[0], index - 1))
         reverse = self._reverse.get(index)
         if reverse is None:
             reverse = {}

@@ -124,8 +124,8 @@ class Tower(ABC):
     def parse(self, text: str, index: int) -> Node:
         """The node at level ``index`` whose label is ``text``; LabelError when there is none."""
 
-    def sort_key(self, node: Node) -> object:
-        """Order of nodes within a level."""
+    def sort_key(self, node: Node, index: int = 0) -> object:
+        """Order of nodes within level ``index``."""
         return node
 
     def label_error(self, text: str, index: int, expected: str) -> LabelError:

@@ -159,7 +159,7 @@ class SymmetricTower(Tower):
             raise self.label_error(text, index, expected)
         return node
 
-    def sort_key(self, node: Partition) -> tuple[int, ...]:
+    def sort_key(self, node: Partition, index: int = 0) -> tuple[int, ...]:
         return tuple(-x for x in node)
 
 

@@ -1,0 +1,151 @@
+"""A tower given by finite matrices: the shape shared by tensor-graph files, character tables and
+the finite subgroups of SU(2).
+
+Node sets are lists of named irreducible modules with their dimensions.  A *step* is a matrix
+M (rows: the source set, columns: the target set) of non-negative integers: M_ij is the
+multiplicity of target module j in (source module i) ⊗ V, or in its restriction or induction.
+The tower repeats a *pattern* of one step (levels 0, 1, 2, ...) or two steps (levels 0, 1/2, 1,
+..., e.g. restrict to a subgroup, then induce back).
+
+Σ_j M_ij d_j = c·d_i for every i (c = dim V for a tensor step, 1 for a restriction, the index
+[G:H] for an induction) makes Σ m·dim at level i equal to the product of the constants of the
+steps taken (McKay, *Graphs, singularities and finite groups*, Proc. Symp. Pure Math. 37, 1980;
+Goodman, de la Harpe, Jones, *Coxeter Graphs and Towers of Algebras*, 1989, 2.1).
+"""
+
+from __future__ import annotations
+
+from dataclasses import dataclass
+from typing import Sequence
+
+from engine.errors import UserError
+from engine.tower import Edge, Tower
+
+
+@dataclass(frozen=True)
+class NodeSet:
+    name: str
+    labels: tuple[str, ...]
+    dimensions: tuple[int, ...]
+
+    def index(self, label: str) -> int:
+        return self.labels.index(label)
+
+
+@dataclass(frozen=True)
+class Step:
+    name: str
+    source: NodeSet
+    target: NodeSet
+    matrix: tuple[tuple[int, ...], ...]
+
+    def constant(self) -> int:
+        """The c with M·d_target = c·d_source; a UserError naming the first row that breaks it."""
+        c = None
+        for i, row in enumerate(self.matrix):
+            total = sum(m * d for m, d in zip(row, self.target.dimensions))
+            di = self.source.dimensions[i]
+            if total % di:
+                raise UserError(
+                    f"step {self.name!r}: row {self.source.labels[i]!r} gives Σ_j M_ij·d_j = {total}, "
+                    f"not a multiple of its dimension {di}"
+                )
+            here = total // di
+            if c is None:
+                c = here
+            elif here != c:
+                raise UserError(
+                    f"step {self.name!r}: row {self.source.labels[i]!r} gives Σ_j M_ij·d_j = {total} = "
+                    f"{here}·{di}, but earlier rows give {c}·d_i (the module tensored must be the same for all)"
+                )
+        return c or 0
+
+
+class MatrixTower(Tower):
+    """A tower walking a repeating pattern of steps between finite node sets."""
+
+    def __init__(self, spec: str, family: str, pattern: Sequence[Step], root: str, kinds: Sequence[str] = ()) -> None:
+        super().__init__(spec)
+        if len(pattern) not in (1, 2):
+            raise UserError(f"{spec}: a pattern has one step (whole levels) or two (half levels), not {len(pattern)}")
+        for a, b in zip(pattern, list(pattern[1:]) + [pattern[0]]):
+            if a.target != b.source:
+                raise UserError(f"{spec}: step {a.name!r} ends in {a.target.name!r} but {b.name!r} starts in {b.source.name!r}")
+        if root not in pattern[0].source.labels:
+            raise UserError(f"{spec}: the root {root!r} is not a node of {pattern[0].source.name!r}")
+        self.family = family
+        self.pattern = tuple(pattern)
+        self.steps_per_unit = len(pattern)
+        self._root = root
+        self._kinds = tuple(kinds)
+        self._constants = [s.constant() for s in pattern]
+        self._edges = [
+            {
+                step.source.labels[i]: [(step.target.labels[j], m) for j, m in enumerate(row) if m]
+                for i, row in enumerate(step.matrix)
+            }
+            for step in pattern
+        ]
+        self._reverse = [
+            {
+                step.target.labels[j]: [(step.source.labels[i], row[j]) for i, row in enumerate(step.matrix) if row[j]]
+                for j in range(len(step.target.labels))
+            }
+            for step in pattern
+        ]
+        self._dims = [dict(zip(s.source.labels, s.source.dimensions)) for s in pattern]
+        self._order = [{label: k for k, label in enumerate(s.source.labels)} for s in pattern]
+
+    def node_set(self, index: int) -> NodeSet:
+        return self.pattern[index % len(self.pattern)].source
+
+    def step_key(self, index: int) -> int:
+        return index % len(self.pattern)
+
+    def level_kind(self, index: int) -> str:
+        return self._kinds[index % len(self._kinds)] if self._kinds else self.node_set(index).name
+
+    def root(self) -> str:
+        return self._root
+
+    def children(self, index: int, node: str) -> Sequence[Edge]:
+        return self._edges[index % len(self.pattern)][node]
+
+    def parents(self, index: int, node: str) -> Sequence[Edge]:
+        if index == 0:
+            return []
+        return self._reverse[(index - 1) % len(self.pattern)].get(node, [])
+
+    def dimension(self, index: int, node: str) -> int:
+        return self._dims[index % len(self.pattern)][node]
+
+    def tensor_dimension(self, index: int) -> int:
+        full, rest = divmod(index, len(self.pattern))
+        value = 1
+        for c in self._constants:
+            value *= c
+        value = value**full
+        for c in self._constants[:rest]:
+            value *= c
+        return value
+
+    def estimate_edges(self, upto: int) -> int:
+        per_step = max(sum(len(v) for v in edges.values()) for edges in self._edges)
+        return per_step * (upto + 1)
+
+    def format(self, node: str) -> str:
+        return node
+
+    def parse(self, text: str, index: int) -> str:
+        label = text.strip()
+        nodes = self.node_set(index)
+        if label not in nodes.labels:
+            shown = ", ".join(nodes.labels[:12]) + (", ..." if len(nodes.labels) > 12 else "")
+            raise self.label_error(text, index, f"one of {shown}")
+        return label
+
+    def sort_key(self, node: str, index: int = 0) -> object:
+        return self._order[index % len(self.pattern)].get(node, 0)
+
+    def mckay_matrix(self, step: int = 0) -> Step:
+        return self.pattern[step]
