@@ -218,9 +218,9 @@ class Diagram:
             return []
         kids, counts = self._step(index, node)
         node_of = self._node_of
-        if counts is None:
-            return [(node_of[k], 1) for k in kids]
-        return [(node_of[k], e) for k, e in zip(kids, counts)]
+        found = [(node_of[k], 1 if counts is None else counts[n]) for n, k in enumerate(kids)]
+        key = self.tower.sort_key
+        return sorted(found, key=lambda ce: key(ce[0], index + 1))
 
     def parents(self, index: int, node: Node) -> list[Edge]:
         """Nodes of the previous level (with a path) joined to ``node``, with edge counts."""

@@ -100,7 +100,7 @@ class SymmetricTower(Tower):
 
     def algebra_name(self, index: int) -> str:
         k = self._k(index)
-        return f"P_{k}+1/2({self.n})" if self._is_half(index) else f"P_{k}({self.n})"
+        return f"P_{{{k}+1/2}}({self.n})" if self._is_half(index) else f"P_{k}({self.n})"
 
     def reachable(self, index: int, node: Partition) -> bool:
         k = self._k(index)

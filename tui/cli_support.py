@@ -1,0 +1,81 @@
+"""What every CLI command shares: reading specs, levels and labels; printing; progress on stderr."""
+
+from __future__ import annotations
+
+import json
+import sys
+import time
+from typing import Any, Callable, TypeVar
+
+from engine.diagram import Diagram
+from engine.levels import parse_level
+from engine.specs import parse_spec
+from engine.tower import Node, Tower
+
+T = TypeVar("T")
+
+
+def open_diagram(spec: str) -> Diagram:
+    return Diagram(parse_spec(spec))
+
+
+def level_index(tower: Tower, text: str) -> int:
+    return tower.index_of(parse_level(text))
+
+
+def node_at(tower: Tower, index: int, label: str) -> Node:
+    return tower.parse(label, index)
+
+
+def print_json(document: Any) -> None:
+    sys.stdout.write(json.dumps(document, ensure_ascii=False) + "\n")
+
+
+def console():
+    """A rich console on stdout (rich is imported only when a table is printed)."""
+    from rich.console import Console
+
+    # piped output is for reading in a file or a pager: do not wrap it at 80 columns
+    width = None if sys.stdout.isatty() else 240
+    return Console(highlight=False, soft_wrap=False, width=width)
+
+
+class DelayedProgress:
+    """A progress bar on stderr that appears only when work has run for more than ``delay`` seconds
+    and stderr is a terminal.  Call it as the engine's progress callable: ``(done, total)``."""
+
+    def __init__(self, description: str, delay: float = 1.0) -> None:
+        self.description = description
+        self.delay = delay
+        self.start = time.monotonic()
+        self._bar: Any = None
+        self._task: Any = None
+        self._enabled = sys.stderr.isatty()
+
+    def __call__(self, done: float, total: float) -> None:
+        if not self._enabled:
+            return
+        if self._bar is None:
+            if time.monotonic() - self.start < self.delay:
+                return
+            from rich.console import Console
+            from rich.progress import BarColumn, Progress, TaskProgressColumn, TextColumn, TimeElapsedColumn
+
+            self._bar = Progress(
+                TextColumn("{task.description}"), BarColumn(), TaskProgressColumn(), TimeElapsedColumn(),
+                console=Console(stderr=True), transient=True,
+            )
+            self._bar.start()
+            self._task = self._bar.add_task(self.description, total=total)
+        self._bar.update(self._task, completed=done, total=total)
+
+    def close(self) -> None:
+        if self._bar is not None:
+            self._bar.stop()
+            self._bar = None
+
+    def run(self, work: Callable[["DelayedProgress"], T]) -> T:
+        try:
+            return work(self)
+        finally:
+            self.close()
