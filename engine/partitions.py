@@ -139,14 +139,34 @@ def hook_lengths(p: Partition) -> list[int]:
     return [p[i] - j + c[j] - i - 1 for i, j in boxes(p)]
 
 
-@lru_cache(maxsize=200_000)
+@lru_cache(maxsize=1 << 20)
 def standard_tableaux_count(p: Partition) -> int:
-    """f^λ = |λ|! / Π hooks: the hook length formula (Frame, Robinson, Thrall 1954;
-    Sagan, *The Symmetric Group*, Thm 3.10.2).  f^λ is the dimension of the Specht module S^λ."""
+    """f^λ, the number of standard Young tableaux of shape λ: the dimension of the Specht module S^λ.
+
+    Computed by Frobenius's formula f^λ = n!·Π_{i<j}(l_i − l_j)/Π_i l_i!, l_i = λ_i + ℓ − i
+    (Fulton and Harris, *Representation Theory*, (4.11)), which is the hook length formula
+    n!/Π hooks (Frame, Robinson, Thrall 1954; Sagan, *The Symmetric Group*, Thm 3.10.2) with
+    O(ℓ²) rather than O(n) factors.
+    """
+    ell = len(p)
+    beta = [p[i] + ell - 1 - i for i in range(ell)]
+    numerator = 1
+    for i in range(ell):
+        bi = beta[i]
+        for j in range(i + 1, ell):
+            numerator *= bi - beta[j]
+    denominator = 1
+    for b in beta:
+        denominator *= factorial(b)
+    return factorial(sum(p)) * numerator // denominator
+
+
+def hook_length_product(p: Partition) -> int:
+    """Π of the hook lengths of λ (so f^λ = |λ|!/this, Frame–Robinson–Thrall)."""
     prod = 1
     for h in hook_lengths(p):
         prod *= h
-    return factorial(sum(p)) // prod
+    return prod
 
 
 def contains(outer: Partition, inner: Partition) -> bool:

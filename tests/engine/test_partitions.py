@@ -1,6 +1,7 @@
 """Partitions against outside sources: brute-force tableau counts, OEIS, sympy."""
 
 from itertools import permutations
+from math import factorial
 
 import pytest
 from sympy.utilities.iterables import partitions as sympy_partitions
@@ -11,6 +12,7 @@ from engine.partitions import (
     conjugate,
     contents,
     format_partition,
+    hook_length_product,
     hook_lengths,
     parse_partition,
     partition_count,
@@ -70,6 +72,7 @@ def test_hook_length_formula_against_brute_force():
         for p in partitions_of(n):
             if n <= 7 or len(p) <= 3:
                 assert standard_tableaux_count(p) == brute_force_standard_tableaux(p), p
+            assert standard_tableaux_count(p) * hook_length_product(p) == factorial(n)
 
 
 def test_sum_of_squares_is_n_factorial():
