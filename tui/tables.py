@@ -25,23 +25,23 @@ def print_levels(diagram: Diagram, upto: int, nodes: bool = True) -> None:
             title = f"level {format_level(tower.level_of(index))}" + (f"  ({kind})" if kind else "")
             table = Table(title=title, title_justify="left", show_edge=False, pad_edge=False)
             table.add_column("node")
-            table.add_column("multiplicity", justify="right")
-            table.add_column("dimension", justify="right")
+            table.add_column("multiplicity", justify="right", overflow="fold")
+            table.add_column("dimension", justify="right", overflow="fold")
             for node in diagram.nodes(index):
                 table.add_row(tower.format(node), str(level[node]), str(tower.dimension(index, node)))
             out.print(table)
             out.print()
     table = Table(title=f"{tower.spec}: level sums", title_justify="left", show_edge=False, pad_edge=False)
-    table.add_column("level", justify="right")
-    table.add_column("nodes", justify="right")
-    table.add_column("Σm", justify="right")
-    table.add_column("Σm² (centralizer)", justify="right")
-    table.add_column("Σm·dim", justify="right")
+    table.add_column("level", justify="right", overflow="fold")
+    table.add_column("nodes", justify="right", overflow="fold")
+    table.add_column("Σm", justify="right", overflow="fold")
+    table.add_column("Σm² (centralizer)", justify="right", overflow="fold")
+    table.add_column("Σm·dim", justify="right", overflow="fold")
     table.add_column("= dim V^⊗k")
     generic = tower.generic_dimension(0) is not None
     if generic:
         table.add_column("diagram algebra")
-        table.add_column("its dimension", justify="right")
+        table.add_column("its dimension", justify="right", overflow="fold")
         table.add_column("faithful")
     first_bad = None
     for index in range(upto + 1):
@@ -87,7 +87,7 @@ def print_node(spec: str, kind: str, doc: dict[str, Any]) -> None:
         table = Table(title=f"{word} (level {_level_text(entries[0]['level'])})", title_justify="left",
                       show_edge=False, pad_edge=False)
         table.add_column("node")
-        table.add_column("edges", justify="right")
+        table.add_column("edges", justify="right", overflow="fold")
         for e in entries:
             table.add_row(e["label"], str(e["edges"]))
         out.print(table)

@@ -116,3 +116,9 @@ def test_errors_are_one_line_with_exit_2(args, words):
     lines = done.stderr.strip().splitlines()
     assert len(lines) == 1, done.stderr
     assert words in lines[0] and "Traceback" not in done.stderr
+
+
+def test_tables_never_cut_numbers(run_cli):
+    # exact numbers: wide values fold onto further lines rather than being cut with an ellipsis
+    status, out, _ = run_cli("levels", "symmetric:n=40", "--to", "20", "--sums-only")
+    assert status == 0 and "…" not in out
