@@ -21,6 +21,7 @@ Sources:
 from __future__ import annotations
 
 from functools import lru_cache
+from math import factorial
 
 from engine.partitions import Partition, conjugate
 
@@ -51,42 +52,31 @@ def general_linear_dimension(n: int, lam: Partition) -> int:
     return _exact(*_cell_product(lam, lambda i, j: n + j - i))
 
 
+def _el_samra_king(n: int, lam: Partition, row_shift: int, col_shift: int, diagonal_by_rows: bool) -> int:
+    """Π (n + r_ij)/h(i,j) with r_ij = λ_i + λ_j − i − j + row_shift above the diagonal and
+    r_ij = −λ'_i − λ'_j + i + j + col_shift below it; the diagonal goes with the rows or columns."""
+    size = sum(lam)
+    rows = (0,) + lam + (0,) * size  # 1-based, padded with zeros
+    cols = (0,) + conjugate(lam) + (0,) * size
+
+    def shift(i: int, j: int) -> int:
+        if i < j or (i == j and diagonal_by_rows):
+            return n + rows[i] + rows[j] - i - j + row_shift
+        return n - cols[i] - cols[j] + i + j + col_shift
+
+    return _exact(*_cell_product(lam, shift))
+
+
 @lru_cache(maxsize=200_000)
 def orthogonal_dimension(n: int, lam: Partition) -> int:
     """dim of the O(n)-module [λ] (λ'_1 + λ'_2 ≤ n) by the El Samra–King product."""
-    conj = conjugate(lam)
-
-    def row(i: int) -> int:
-        return lam[i - 1] if i <= len(lam) else 0
-
-    def col(j: int) -> int:
-        return conj[j - 1] if j <= len(conj) else 0
-
-    def shift(i: int, j: int) -> int:
-        if i <= j:
-            return n + row(i) + row(j) - i - j
-        return n - col(i) - col(j) + i + j - 2
-
-    return _exact(*_cell_product(lam, shift))
+    return _el_samra_king(n, lam, 0, -2, diagonal_by_rows=True)
 
 
 @lru_cache(maxsize=200_000)
 def symplectic_dimension(n: int, lam: Partition) -> int:
     """dim of the Sp(n)-module ⟨λ⟩ (n = 2M even, ℓ(λ) ≤ M) by the El Samra–King product."""
-    conj = conjugate(lam)
-
-    def row(i: int) -> int:
-        return lam[i - 1] if i <= len(lam) else 0
-
-    def col(j: int) -> int:
-        return conj[j - 1] if j <= len(conj) else 0
-
-    def shift(i: int, j: int) -> int:
-        if i < j:
-            return n + row(i) + row(j) - i - j + 2
-        return n - col(i) - col(j) + i + j
-
-    return _exact(*_cell_product(lam, shift))
+    return _el_samra_king(n, lam, 2, 0, diagonal_by_rows=False)
 
 
 def mixed_weight(n: int, pair: PartitionPair) -> tuple[int, ...]:
@@ -98,22 +88,32 @@ def mixed_weight(n: int, pair: PartitionPair) -> tuple[int, ...]:
     return alpha + (0,) * zeros + tuple(-b for b in reversed(beta))
 
 
-@lru_cache(maxsize=256)
-def _weyl_denominator(n: int) -> int:
-    """Π_{i<j} (j − i) = 1!·2!···(n−1)!."""
-    den = 1
-    for gap in range(1, n):
-        den *= gap ** (n - gap)
-    return den
-
-
 @lru_cache(maxsize=200_000)
 def mixed_dimension(n: int, pair: PartitionPair) -> int:
-    """dim of the rational GL_n-module of the pair (α, β), by Weyl's dimension formula."""
+    """dim of the rational GL_n-module of the pair (α, β), by Weyl's dimension formula.
+
+    The factors with both i and j in the block of z zeros are 1; those with one end there
+    telescope into factorials: for a row i of α, Π_j (w_i − i + j)/(j − i) over the block
+    p ≤ j < p+z is (w_i−i+p+z−1)!/(w_i−i+p−1)! · (p−1−i)!/(p+z−1−i)!, and likewise for β.
+    """
+    alpha, beta = pair
+    p, q = len(alpha), len(beta)
+    z = n - p - q
     w = mixed_weight(n, pair)
-    num = 1
-    for i in range(n):
+    outside = list(range(p)) + list(range(p + z, n))
+    num = den = 1
+    for a, i in enumerate(outside):
         wi = w[i] - i
-        for j in range(i + 1, n):
+        for j in outside[a + 1 :]:
             num *= wi - w[j] + j
-    return _exact(num, _weyl_denominator(n))
+            den *= j - i
+    if z:
+        for i in range(p):
+            shift = w[i] - i
+            num *= factorial(shift + p + z - 1) * factorial(p - 1 - i)
+            den *= factorial(shift + p - 1) * factorial(p + z - 1 - i)
+        for j in range(p + z, n):
+            b = j - w[j]
+            num *= factorial(b - p) * factorial(j - p - z)
+            den *= factorial(b - p - z) * factorial(j - p)
+    return _exact(num, den)

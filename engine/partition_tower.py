@@ -17,6 +17,7 @@ from __future__ import annotations
 from math import comb, isqrt
 from typing import Sequence
 
+from engine.errors import SpecError
 from engine.partitions import (
     Partition,
     PartitionError,
@@ -25,7 +26,11 @@ from engine.partitions import (
     parse_partition,
     smaller_by_one_box,
 )
+from engine.specs import int_param
 from engine.tower import Edge, Tower
+
+#: the largest N accepted for dim V
+MAX_N = 1000
 
 #: estimates stop counting once past this many edges (far over any limit)
 ESTIMATE_CAP = 10**15
@@ -45,6 +50,14 @@ def bounded_partition_counts(limit: int, rows: int, cap: int = ESTIMATE_CAP) -> 
     return ways
 
 
+def vector_dimension(family: str, params: dict[str, str], minimum: int = 1) -> int:
+    """The spec key ``n`` (dim V), between ``minimum`` and MAX_N; a SpecError otherwise."""
+    n = int_param(family, params, "n", minimum=minimum)
+    if n > MAX_N:
+        raise SpecError(f"{family}: n={n} is too large (at most {MAX_N})")
+    return n
+
+
 def corner_bound(size: int) -> int:
     """At most this many boxes can be added to (or removed from) a partition of ``size``:
     a partition with c removable corners has size ≥ c(c+1)/2."""
@@ -56,8 +69,13 @@ class OneBoxTower(Tower):
 
     #: whether a step may also remove a box (O(N), Sp(2M)) or only adds one (GL_N)
     removes: bool = True
-    #: a bound on the number of rows of an admissible partition (used by the estimate)
-    rows: int = 1
+
+    def __init__(self, spec: str, n: int, rows: int) -> None:
+        super().__init__(spec)
+        #: dim V
+        self.n = n
+        #: a bound on the number of rows of an admissible partition (used by the estimate)
+        self.rows = rows
 
     def admissible(self, lam: Partition) -> bool:
         """Whether λ labels a module of the group (e.g. at most N rows)."""
@@ -66,6 +84,12 @@ class OneBoxTower(Tower):
     def admissible_text(self) -> str:
         """The rule of ``admissible`` in words, for error messages."""
         raise NotImplementedError
+
+    def step_key(self, index: int) -> int:
+        return 0  # every step tensors with the same V
+
+    def tensor_dimension(self, index: int) -> int:
+        return self.n**index
 
     # ----- graph ----------------------------------------------------------------------------
     def root(self) -> Partition:

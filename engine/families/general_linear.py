@@ -13,10 +13,9 @@ from __future__ import annotations
 from math import factorial
 
 from engine.classical_dimensions import general_linear_dimension
-from engine.errors import SpecError
-from engine.partition_tower import OneBoxTower
+from engine.partition_tower import OneBoxTower, vector_dimension
 from engine.partitions import Partition, standard_tableaux_count
-from engine.specs import Family, int_param
+from engine.specs import Family
 
 
 class GeneralLinearTower(OneBoxTower):
@@ -24,9 +23,7 @@ class GeneralLinearTower(OneBoxTower):
     removes = False
 
     def __init__(self, spec: str, n: int) -> None:
-        super().__init__(spec)
-        self.n = n
-        self.rows = n
+        super().__init__(spec, n, n)
 
     def admissible(self, lam: Partition) -> bool:
         return len(lam) <= self.n
@@ -37,14 +34,8 @@ class GeneralLinearTower(OneBoxTower):
     def level_kind(self, index: int) -> str:
         return f"GL_{self.n}"
 
-    def step_key(self, index: int) -> int:
-        return 0
-
     def dimension(self, index: int, node: Partition) -> int:
         return general_linear_dimension(self.n, node)
-
-    def tensor_dimension(self, index: int) -> int:
-        return self.n**index
 
     def generic_dimension(self, index: int) -> int:
         """k!, the dimension of CS_k (OEIS A000142)."""
@@ -59,9 +50,7 @@ class GeneralLinearTower(OneBoxTower):
 
 
 def _build(spec: str, params: dict[str, str]) -> GeneralLinearTower:
-    n = int_param("general-linear", params, "n", minimum=1)
-    if n > 1000:
-        raise SpecError(f"general-linear: n={n} is too large (at most 1000)")
+    n = vector_dimension("general-linear", params, minimum=1)
     return GeneralLinearTower(spec, n)
 
 

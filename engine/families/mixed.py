@@ -24,9 +24,9 @@ from typing import Sequence
 from engine.classical_dimensions import mixed_dimension
 from engine.errors import SpecError
 from engine.partition_pairs import PartitionPair, format_pair, parse_pair
-from engine.partition_tower import ESTIMATE_CAP, bounded_partition_counts, corner_bound
+from engine.partition_tower import ESTIMATE_CAP, bounded_partition_counts, corner_bound, vector_dimension
 from engine.partitions import Partition, PartitionError, larger_by_one_box, smaller_by_one_box
-from engine.specs import Family, int_param
+from engine.specs import Family
 from engine.tower import Edge, Tower
 
 _MAX_WORD = 100_000
@@ -146,9 +146,7 @@ class MixedTower(Tower):
 
 
 def _build(spec: str, params: dict[str, str]) -> MixedTower:
-    n = int_param("mixed", params, "n", minimum=1)
-    if n > 1000:
-        raise SpecError(f"mixed: n={n} is too large (at most 1000)")
+    n = vector_dimension("mixed", params)
     word = params.get("word", "")
     if not word or set(word) - {"v", "d"}:
         raise SpecError(f"mixed: key 'word' must be a non-empty word in the letters v and d (e.g. vvdd), got {word!r}")

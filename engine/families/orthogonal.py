@@ -16,10 +16,9 @@ from __future__ import annotations
 
 from engine.classical_dimensions import orthogonal_dimension
 from engine.combinatorics import double_factorial_odd
-from engine.errors import SpecError
-from engine.partition_tower import OneBoxTower
+from engine.partition_tower import OneBoxTower, vector_dimension
 from engine.partitions import Partition
-from engine.specs import Family, int_param
+from engine.specs import Family
 
 
 class OrthogonalTower(OneBoxTower):
@@ -27,9 +26,7 @@ class OrthogonalTower(OneBoxTower):
     removes = True
 
     def __init__(self, spec: str, n: int) -> None:
-        super().__init__(spec)
-        self.n = n
-        self.rows = n
+        super().__init__(spec, n, n)
 
     def admissible(self, lam: Partition) -> bool:
         """λ'_1 + λ'_2 ≤ N: rows, plus rows of length at least 2."""
@@ -46,14 +43,8 @@ class OrthogonalTower(OneBoxTower):
     def level_kind(self, index: int) -> str:
         return f"O({self.n})"
 
-    def step_key(self, index: int) -> int:
-        return 0
-
     def dimension(self, index: int, node: Partition) -> int:
         return orthogonal_dimension(self.n, node)
-
-    def tensor_dimension(self, index: int) -> int:
-        return self.n**index
 
     def generic_dimension(self, index: int) -> int:
         """(2k−1)!!, the dimension of B_k(N) (OEIS A001147)."""
@@ -64,9 +55,7 @@ class OrthogonalTower(OneBoxTower):
 
 
 def _build(spec: str, params: dict[str, str]) -> OrthogonalTower:
-    n = int_param("orthogonal", params, "n", minimum=1)
-    if n > 1000:
-        raise SpecError(f"orthogonal: n={n} is too large (at most 1000)")
+    n = vector_dimension("orthogonal", params, minimum=1)
     return OrthogonalTower(spec, n)
 
 

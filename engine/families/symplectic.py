@@ -18,9 +18,9 @@ from __future__ import annotations
 from engine.classical_dimensions import symplectic_dimension
 from engine.combinatorics import catalan, double_factorial_odd
 from engine.errors import SpecError
-from engine.partition_tower import OneBoxTower
+from engine.partition_tower import OneBoxTower, vector_dimension
 from engine.partitions import Partition
-from engine.specs import Family, int_param
+from engine.specs import Family
 
 
 class SymplecticTower(OneBoxTower):
@@ -28,9 +28,7 @@ class SymplecticTower(OneBoxTower):
     removes = True
 
     def __init__(self, spec: str, n: int) -> None:
-        super().__init__(spec)
-        self.n = n
-        self.rows = n // 2
+        super().__init__(spec, n, n // 2)
 
     def admissible(self, lam: Partition) -> bool:
         return len(lam) <= self.rows
@@ -41,14 +39,8 @@ class SymplecticTower(OneBoxTower):
     def level_kind(self, index: int) -> str:
         return "SL_2" if self.n == 2 else f"Sp({self.n})"
 
-    def step_key(self, index: int) -> int:
-        return 0
-
     def dimension(self, index: int, node: Partition) -> int:
         return symplectic_dimension(self.n, node)
-
-    def tensor_dimension(self, index: int) -> int:
-        return self.n**index
 
     def generic_dimension(self, index: int) -> int:
         """Catalan(k) for TL_k when n = 2 (OEIS A000108), else (2k−1)!! for B_k(−n) (A001147)."""
@@ -61,11 +53,9 @@ class SymplecticTower(OneBoxTower):
 
 
 def _build(spec: str, params: dict[str, str]) -> SymplecticTower:
-    n = int_param("symplectic", params, "n", minimum=2)
+    n = vector_dimension("symplectic", params, minimum=2)
     if n % 2:
         raise SpecError(f"symplectic: key 'n' must be even (Sp(N) acts on C^N for N = 2, 4, 6, ...), got {n}")
-    if n > 1000:
-        raise SpecError(f"symplectic: n={n} is too large (at most 1000)")
     return SymplecticTower(spec, n)
 
 

@@ -3,22 +3,15 @@
 from math import comb
 
 import pytest
-from sympy.utilities.iterables import partitions as sympy_partitions
 
 from engine.diagram import Diagram
 from engine.errors import LabelError
 from engine.specs import parse_spec
-from tests.engine.families.tower_checks import assert_parents_invert_children, edges_walked
+from tests.engine.families.tower_checks import assert_parents_invert_children, edges_walked, partitions_by_sympy
 from tests.engine.families.weyl_reference import generic_point, orthogonal_on_torus, vector_trace
 
 # OEIS A001147, double factorials (2k−1)!!
 DOUBLE_FACTORIALS = [1, 1, 3, 15, 105, 945, 10395, 135135, 2027025, 34459425, 654729075]
-
-
-def _all_partitions(size: int) -> list[tuple[int, ...]]:
-    if size == 0:
-        return [()]
-    return [tuple(sorted((a for a, m in p.items() for _ in range(m)), reverse=True)) for p in sympy_partitions(size)]
 
 
 def _admissible(n: int, lam) -> bool:
@@ -27,7 +20,7 @@ def _admissible(n: int, lam) -> bool:
 
 
 def _rule(n: int, k: int) -> set:
-    return {lam for j in range(k % 2, k + 1, 2) for lam in _all_partitions(j) if _admissible(n, lam)}
+    return {lam for j in range(k % 2, k + 1, 2) for lam in partitions_by_sympy(j) if _admissible(n, lam)}
 
 
 @pytest.mark.parametrize("n", [1, 2, 3, 4, 5, 7])
@@ -89,7 +82,7 @@ def test_dimensions_against_weyl_dimension_formula(n):
     # SO(N) Weyl dimension at λ*, doubled when N is even and ℓ(λ*) = N/2, from the root system
     tower = parse_spec(f"orthogonal:n={n}")
     for size in range(7):
-        for lam in _all_partitions(size):
+        for lam in partitions_by_sympy(size):
             if _admissible(n, lam):
                 assert tower.dimension(size, lam) == orthogonal_on_torus(n, lam, None), lam
 

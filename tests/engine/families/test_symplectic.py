@@ -4,12 +4,11 @@ Weyl's formulas of type C."""
 from math import comb
 
 import pytest
-from sympy.utilities.iterables import partitions as sympy_partitions
 
 from engine.diagram import Diagram
 from engine.errors import LabelError, SpecError
 from engine.specs import parse_spec
-from tests.engine.families.tower_checks import assert_parents_invert_children, edges_walked
+from tests.engine.families.tower_checks import assert_parents_invert_children, edges_walked, partitions_by_sympy
 from tests.engine.families.weyl_reference import generic_point, vector_trace, weyl_character, weyl_dimension
 
 # OEIS A001147, double factorials (2k−1)!!
@@ -18,15 +17,9 @@ DOUBLE_FACTORIALS = [1, 1, 3, 15, 105, 945, 10395, 135135, 2027025, 34459425, 65
 CATALAN = [1, 1, 2, 5, 14, 42, 132, 429, 1430, 4862, 16796, 58786, 208012]
 
 
-def _partitions(size: int, rows: int) -> list[tuple[int, ...]]:
-    if size == 0:
-        return [()]
-    return [tuple(sorted((a for a, m in p.items() for _ in range(m)), reverse=True)) for p in sympy_partitions(size, m=rows)]
-
-
 def _rule(m: int, k: int) -> set:
     # at most M rows, |λ| ≤ k, |λ| ≡ k (mod 2)
-    return {lam for j in range(k % 2, k + 1, 2) for lam in _partitions(j, m)}
+    return {lam for j in range(k % 2, k + 1, 2) for lam in partitions_by_sympy(j, m)}
 
 
 @pytest.mark.parametrize("n", [2, 4, 6, 8])
@@ -79,7 +72,7 @@ def test_dimensions_against_weyl_dimension_formula(m):
     # Weyl's dimension formula of type C_M from the root system (weyl_reference)
     tower = parse_spec(f"symplectic:n={2 * m}")
     for size in range(8):
-        for lam in _partitions(size, m):
+        for lam in partitions_by_sympy(size, m):
             assert tower.dimension(size, lam) == weyl_dimension("C", m, lam), lam
 
 

@@ -1,9 +1,20 @@
-"""Checks shared by the classical towers' tests: the size estimate is an upper bound, and the
-tower's own parents agree with inverting its children (the diagram's fallback)."""
+"""Checks shared by the classical towers' tests: the size estimate is an upper bound, the
+tower's own parents agree with inverting its children (the diagram's fallback), and partitions
+listed by sympy (an outside enumeration) for the level rules."""
 
 from __future__ import annotations
 
+from sympy.utilities.iterables import partitions as sympy_partitions
+
 from engine.diagram import Diagram
+
+
+def partitions_by_sympy(size: int, rows: int | None = None) -> list[tuple[int, ...]]:
+    """The partitions of ``size`` with at most ``rows`` parts, as tuples, listed by sympy."""
+    if size == 0:
+        return [()]
+    found = sympy_partitions(size) if rows is None else sympy_partitions(size, m=rows)
+    return [tuple(sorted((a for a, m in p.items() for _ in range(m)), reverse=True)) for p in found]
 
 
 def edges_walked(diagram: Diagram, upto: int) -> int:
