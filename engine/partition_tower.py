@@ -50,6 +50,24 @@ def bounded_partition_counts(limit: int, rows: int, cap: int = ESTIMATE_CAP) -> 
     return ways
 
 
+class CountTable:
+    """``bounded_partition_counts`` computed lazily: first to 512, then (only when asked beyond,
+    which happens when the counts grow slowly, i.e. few rows) to the end, so that an estimate that
+    reaches the cap early never pays for a long table."""
+
+    _FIRST = 512
+
+    def __init__(self, limit: int, rows: int) -> None:
+        self.limit = limit
+        self.rows = rows
+        self._table = bounded_partition_counts(min(limit, self._FIRST), rows)
+
+    def __getitem__(self, j: int) -> int:
+        if j >= len(self._table):
+            self._table = bounded_partition_counts(self.limit, self.rows)
+        return self._table[j]
+
+
 def vector_dimension(family: str, params: dict[str, str], minimum: int = 1) -> int:
     """The spec key ``n`` (dim V), between ``minimum`` and MAX_N; a SpecError otherwise."""
     n = int_param(family, params, "n", minimum=minimum)
@@ -130,7 +148,7 @@ class OneBoxTower(Tower):
             count = min(comb(upto + self.rows - 1, self.rows - 1), ESTIMATE_CAP)
             nodes = count * (upto // 2 + 1 if self.removes else 1)
             return min((upto + 1) * nodes * factor * corner_bound(upto), ESTIMATE_CAP)
-        counts = bounded_partition_counts(upto, self.rows)
+        counts = CountTable(upto, self.rows)
         total = 0
         level_nodes = [0, 0]  # running Σ_{j ≤ k, j ≡ k} counts[j], by parity
         for k in range(upto + 1):

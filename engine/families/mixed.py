@@ -24,7 +24,7 @@ from typing import Sequence
 from engine.classical_dimensions import mixed_dimension
 from engine.errors import SpecError
 from engine.partition_pairs import PartitionPair, format_pair, parse_pair
-from engine.partition_tower import ESTIMATE_CAP, bounded_partition_counts, corner_bound, vector_dimension
+from engine.partition_tower import ESTIMATE_CAP, CountTable, corner_bound, vector_dimension
 from engine.partitions import Partition, PartitionError, larger_by_one_box, smaller_by_one_box
 from engine.specs import Family
 from engine.tower import Edge, Tower
@@ -103,13 +103,17 @@ class MixedTower(Tower):
 
     def estimate_edges(self, upto: int) -> int:
         """Σ over levels of Σ_t p_N(r−t)·p_N(s−t) nodes (p_N: partitions with at most N rows)
-        times a bound on the boxes one can add or remove."""
+        times a bound on the boxes one can add or remove; past level 2000 each level's sum is
+        bounded by (min(r,s)+1)·p_N(r)·p_N(s) (p_N grows), which costs one step."""
         upto = min(upto, self.max_index)
-        counts = bounded_partition_counts(upto, self.n)
+        counts = CountTable(upto, self.n)
         total = 0
         for index in range(upto + 1):
             r, s = self.counts(index)
-            nodes = sum(counts[r - t] * counts[s - t] for t in range(min(r, s) + 1))
+            if index <= 2000:
+                nodes = sum(counts[r - t] * counts[s - t] for t in range(min(r, s) + 1))
+            else:
+                nodes = (min(r, s) + 1) * counts[r] * counts[s]
             total += nodes * 2 * corner_bound(index)
             if total >= ESTIMATE_CAP:
                 return ESTIMATE_CAP

@@ -8,7 +8,12 @@ import pytest
 from engine.diagram import Diagram
 from engine.errors import LabelError, SpecError
 from engine.specs import parse_spec
-from tests.engine.families.tower_checks import assert_parents_invert_children, edges_walked, partitions_by_sympy
+from tests.engine.families.tower_checks import (
+    assert_labels_round_trip,
+    assert_parents_invert_children,
+    edges_walked,
+    partitions_by_sympy,
+)
 from tests.engine.families.weyl_reference import generic_point, vector_trace, weyl_character, weyl_dimension
 
 # OEIS A000142, factorials
@@ -123,6 +128,7 @@ def test_textbook_dimensions():
 def test_parents_estimate_and_labels():
     d = Diagram(parse_spec("general-linear:n=3"))
     assert_parents_invert_children(d, 8)
+    assert_labels_round_trip(d, 8)
     assert d.tower.estimate_edges(9) >= edges_walked(d, 9)
     assert d.tower.parse("2 1 1", 4) == (2, 1, 1)
     assert d.tower.format((2, 1, 1)) == "(2,1,1)"

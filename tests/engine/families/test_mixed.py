@@ -11,7 +11,12 @@ from engine.errors import LabelError, SpecError, UserError
 from engine.partition_pairs import format_pair, parse_pair
 from engine.partitions import PartitionError
 from engine.specs import parse_spec
-from tests.engine.families.tower_checks import assert_parents_invert_children, edges_walked, partitions_by_sympy
+from tests.engine.families.tower_checks import (
+    assert_labels_round_trip,
+    assert_parents_invert_children,
+    edges_walked,
+    partitions_by_sympy,
+)
 from tests.engine.families.weyl_reference import generic_point, weyl_character, weyl_dimension
 
 WORDS = ["vdvdvdvdvd", "vvvvvddddd", "dvvdvddvvd", "ddvvvdvvdd"]
@@ -131,6 +136,7 @@ def test_pairs_are_read_in_several_forms_and_written_in_one():
 def test_labels_parents_estimate_and_spec_errors():
     d = Diagram(parse_spec("mixed:n=2,word=vvdvd"))
     assert_parents_invert_children(d, 5)
+    assert_labels_round_trip(d, 5)
     assert d.tower.estimate_edges(5) >= edges_walked(d, 5)
     assert d.tower.parse("((1),())", 3) == ((1,), ())
     assert d.tower.format(((1,), ())) == "((1),())"

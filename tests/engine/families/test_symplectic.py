@@ -8,7 +8,12 @@ import pytest
 from engine.diagram import Diagram
 from engine.errors import LabelError, SpecError
 from engine.specs import parse_spec
-from tests.engine.families.tower_checks import assert_parents_invert_children, edges_walked, partitions_by_sympy
+from tests.engine.families.tower_checks import (
+    assert_labels_round_trip,
+    assert_parents_invert_children,
+    edges_walked,
+    partitions_by_sympy,
+)
 from tests.engine.families.weyl_reference import generic_point, vector_trace, weyl_character, weyl_dimension
 
 # OEIS A001147, double factorials (2k−1)!!
@@ -97,6 +102,7 @@ def test_characters_at_a_generic_torus_point(m):
 def test_parents_estimate_labels_and_spec_errors():
     d = Diagram(parse_spec("symplectic:n=4"))
     assert_parents_invert_children(d, 8)
+    assert_labels_round_trip(d, 8)
     assert d.tower.estimate_edges(10) >= edges_walked(d, 10)
     assert d.tower.parse("(1,1)", 4) == (1, 1)
     assert d.tower.algebra_name(3) == "B_3(-4)"

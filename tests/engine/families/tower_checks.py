@@ -31,3 +31,11 @@ def assert_parents_invert_children(diagram: Diagram, upto: int) -> None:
                 inverted.setdefault(child, {})[parent] = e
         for node in diagram.level(index):
             assert dict(diagram.parents(index, node)) == inverted[node]
+
+
+def assert_labels_round_trip(diagram: Diagram, upto: int) -> None:
+    """parse(format(node), level) == node for every node with a path (the tower contract)."""
+    tower = diagram.tower
+    for index in range(upto + 1):
+        for node in diagram.nodes(index):
+            assert tower.parse(tower.format(node), index) == node
