@@ -8,7 +8,8 @@ Sources:
   (Stanley, *Enumerative Combinatorics* vol. 2, Cor. 7.21.4; Macdonald, *Symmetric Functions
   and Hall Polynomials*, I.3 Example 4).
 - O(N) and Sp(2M), the products of El Samra and King (N. El Samra and R. C. King, *Dimensions of
-  irreducible representations of the classical Lie groups*, J. Phys. A 12, 1979):
+  irreducible representations of the classical Lie groups*, J. Phys. A 12, 1979; reference details
+  from memory, the products are held against Weyl's formulas in the tests):
   dim[λ]_O(N) = Π (N + r_ij)/h(i,j), r_ij = λ_i + λ_j − i − j (i ≤ j), −λ'_i − λ'_j + i + j − 2 (i > j);
   dim⟨λ⟩_Sp(2M) = Π (2M + s_ij)/h(i,j), s_ij = λ_i + λ_j − i − j + 2 (i < j), −λ'_i − λ'_j + i + j (i ≥ j).
 - GL_N at an integral dominant weight w (rational modules), Weyl's dimension formula in type A:
