@@ -1,0 +1,70 @@
+"""``orthogonal:n=N``: O(N) on V = C^N; centralizers: the Brauer algebras B_k(N).
+
+Level k holds the partitions λ with |λ| ≤ k, |λ| ≡ k (mod 2) and λ'_1 + λ'_2 ≤ N; these label the
+irreducible O(N)-modules [λ], with [λ] = det ⊗ [λ*] when λ'_1 > N/2, λ* having its first column
+cut to N − λ'_1 (Weyl, *The Classical Groups*, 1939, ch. V; Goodman and Wallach, *Symmetry,
+Representations, and Invariants*, 2009, 10.2).  An edge adds or removes one box, both ends
+admissible (engine.partition_tower).  Dimensions by the El Samra–King product
+(engine.classical_dimensions).
+
+Brauer's centralizer theorem (Brauer, *On algebras which are connected with the semisimple
+continuous groups*, Ann. of Math. 38, 1937): B_k(N), of dimension (2k−1)!! (OEIS A001147), maps
+onto the centralizer of O(N) in End(V^{⊗k}), injectively exactly while k ≤ N.
+"""
+
+from __future__ import annotations
+
+from engine.classical_dimensions import orthogonal_dimension
+from engine.combinatorics import double_factorial_odd
+from engine.partition_tower import OneBoxTower, vector_dimension
+from engine.partitions import Partition
+from engine.specs import Family
+
+
+class OrthogonalTower(OneBoxTower):
+    family = "orthogonal"
+    removes = True
+
+    def __init__(self, spec: str, n: int) -> None:
+        super().__init__(spec, n, n)
+
+    def admissible(self, lam: Partition) -> bool:
+        """λ'_1 + λ'_2 ≤ N: rows, plus rows of length at least 2."""
+        second = 0
+        for part in lam:
+            if part < 2:
+                break
+            second += 1
+        return len(lam) + second <= self.n
+
+    def admissible_text(self) -> str:
+        return f"λ'_1 + λ'_2 ≤ {self.n} (first two columns)"
+
+    def level_kind(self, index: int) -> str:
+        return f"O({self.n})"
+
+    def dimension(self, index: int, node: Partition) -> int:
+        return orthogonal_dimension(self.n, node)
+
+    def generic_dimension(self, index: int) -> int:
+        """(2k−1)!!, the dimension of B_k(N) (OEIS A001147)."""
+        return double_factorial_odd(index)
+
+    def algebra_name(self, index: int) -> str:
+        return f"B_{index}({self.n})"
+
+
+def _build(spec: str, params: dict[str, str]) -> OrthogonalTower:
+    n = vector_dimension("orthogonal", params, minimum=1)
+    return OrthogonalTower(spec, n)
+
+
+FAMILY = Family(
+    name="orthogonal",
+    summary="O(N) on C^N; centralizers: Brauer algebras B_k(N)",
+    keys={"n": "N, the dimension of V (N ≥ 1)"},
+    build=_build,
+    required=("n",),
+    rank=31,
+    example="orthogonal:n=3",
+)

@@ -1,0 +1,191 @@
+"""Towers whose nodes are partitions and whose steps add (and maybe remove) one box.
+
+Shared by ``general-linear`` (add a box: the Pieri rule V_λ ⊗ V = ⊕ V_{λ+□}, Fulton and Harris,
+*Representation Theory*, 6.1 and A.7), ``orthogonal`` and ``symplectic`` (add or remove a box,
+both ends admissible: the product with V by the Newell–Littlewood rule and King's modification
+rules, King, J. Math. Phys. 12, 1971; the Bratteli diagrams of the Brauer algebras, Wenzl,
+*On the structure of Brauer's centralizer algebras*, Ann. of Math. 128, 1988; Goodman and
+Wallach, *Symmetry, Representations, and Invariants*, 2009, ch. 10).
+
+A subclass says which partitions are admissible (label modules of its group), whether a step
+may remove a box, and what a node's dimension is; the rest (labels, order, parents, the size
+estimate) is here.
+"""
+
+from __future__ import annotations
+
+from math import comb, isqrt
+from typing import Sequence
+
+from engine.errors import SpecError
+from engine.partitions import (
+    Partition,
+    PartitionError,
+    format_partition,
+    larger_by_one_box,
+    parse_partition,
+    smaller_by_one_box,
+)
+from engine.specs import int_param
+from engine.tower import Edge, Tower
+
+#: the largest N accepted for dim V
+MAX_N = 1000
+
+#: estimates stop counting once past this many edges (far over any limit)
+ESTIMATE_CAP = 10**15
+#: up to this level estimates sum level by level; past it they bound the last level times the count
+_SUMMED_LEVELS = 20_000
+
+
+def bounded_partition_counts(limit: int, rows: int, cap: int = ESTIMATE_CAP) -> list[int]:
+    """[number of partitions of j with at most ``rows`` parts, for j = 0..limit], each capped at
+    ``cap``; by the dynamic programme over part sizes 1..rows (conjugation turns "at most rows
+    parts" into "parts at most rows"; Andrews, *The Theory of Partitions*, ch. 1)."""
+    ways = [1] + [0] * limit
+    for part in range(1, min(rows, limit) + 1):
+        for total in range(part, limit + 1):
+            value = ways[total] + ways[total - part]
+            ways[total] = value if value < cap else cap
+    return ways
+
+
+class CountTable:
+    """``bounded_partition_counts`` computed lazily: first to 512, then (only when asked beyond,
+    which happens when the counts grow slowly, i.e. few rows) to the end, so that an estimate that
+    reaches the cap early never pays for a long table."""
+
+    _FIRST = 512
+
+    def __init__(self, limit: int, rows: int) -> None:
+        self.limit = limit
+        self.rows = rows
+        self._table = bounded_partition_counts(min(limit, self._FIRST), rows)
+
+    def __getitem__(self, j: int) -> int:
+        if j >= len(self._table):
+            self._table = bounded_partition_counts(self.limit, self.rows)
+        return self._table[j]
+
+
+def vector_dimension(family: str, params: dict[str, str], minimum: int = 1) -> int:
+    """The spec key ``n`` (dim V), between ``minimum`` and MAX_N; a SpecError otherwise."""
+    n = int_param(family, params, "n", minimum=minimum)
+    if n > MAX_N:
+        raise SpecError(f"{family}: n={n} is too large (at most {MAX_N})")
+    return n
+
+
+def corner_bound(size: int) -> int:
+    """At most this many boxes can be added to (or removed from) a partition of ``size``:
+    a partition with c removable corners has size ≥ c(c+1)/2."""
+    return isqrt(2 * size) + 2
+
+
+class OneBoxTower(Tower):
+    """A tower of partitions; each step adds a box (and removes one, when ``removes``)."""
+
+    #: whether a step may also remove a box (O(N), Sp(2M)) or only adds one (GL_N)
+    removes: bool = True
+
+    def __init__(self, spec: str, n: int, rows: int) -> None:
+        super().__init__(spec)
+        #: dim V
+        self.n = n
+        #: a bound on the number of rows of an admissible partition (used by the estimate)
+        self.rows = rows
+
+    def admissible(self, lam: Partition) -> bool:
+        """Whether λ labels a module of the group (e.g. at most N rows)."""
+        raise NotImplementedError
+
+    def admissible_text(self) -> str:
+        """The rule of ``admissible`` in words, for error messages."""
+        raise NotImplementedError
+
+    def step_key(self, index: int) -> int:
+        return 0  # every step tensors with the same V
+
+    def tensor_dimension(self, index: int) -> int:
+        return self.n**index
+
+    # ----- graph ----------------------------------------------------------------------------
+    def root(self) -> Partition:
+        return ()
+
+    def children(self, index: int, node: Partition) -> Sequence[Edge]:
+        ok = self.admissible
+        out: list[Edge] = [(lam, 1) for lam in larger_by_one_box(node) if ok(lam)]
+        if self.removes:
+            out.extend((mu, 1) for mu in smaller_by_one_box(node))
+        return out
+
+    def parents(self, index: int, node: Partition) -> Sequence[Edge]:
+        if index == 0:
+            return []
+        if not self.removes:
+            return [(mu, 1) for mu in smaller_by_one_box(node)]
+        return self.children(index - 1, node)  # the step graph is symmetric
+
+    def on_level(self, index: int, lam: Partition) -> bool:
+        """Whether λ has a path to level ``index`` (the rule the tests hold path counting to)."""
+        size = sum(lam)
+        if not self.admissible(lam):
+            return False
+        if not self.removes:
+            return size == index
+        return size <= index and (index - size) % 2 == 0
+
+    # ----- size -----------------------------------------------------------------------------
+    def estimate_edges(self, upto: int) -> int:
+        """Σ over levels of (nodes on the level) × (a bound on the steps out of one node).
+
+        Nodes on level k: the partitions of k (GL), or of j ≤ k with j ≡ k (mod 2) (O, Sp), with
+        at most ``rows`` rows; past level 20000 the last level's bound (levels grow) times the
+        number of levels, with the compositions bound C(k+rows−1, rows−1) for the count."""
+        factor = 2 if self.removes else 1
+        if upto > _SUMMED_LEVELS:
+            count = min(comb(upto + self.rows - 1, self.rows - 1), ESTIMATE_CAP)
+            nodes = count * (upto // 2 + 1 if self.removes else 1)
+            return min((upto + 1) * nodes * factor * corner_bound(upto), ESTIMATE_CAP)
+        counts = CountTable(upto, self.rows)
+        total = 0
+        level_nodes = [0, 0]  # running Σ_{j ≤ k, j ≡ k} counts[j], by parity
+        for k in range(upto + 1):
+            if self.removes:
+                level_nodes[k % 2] += counts[k]
+                nodes = level_nodes[k % 2]
+            else:
+                nodes = counts[k]
+            total += nodes * factor * corner_bound(k)
+            if total >= ESTIMATE_CAP:
+                return ESTIMATE_CAP
+        return total
+
+    # ----- labels ---------------------------------------------------------------------------
+    def format(self, node: Partition) -> str:
+        return format_partition(node)
+
+    def parse(self, text: str, index: int) -> Partition:
+        if self.removes:
+            where = f"of size ≤ {index} and ≡ {index} mod 2" if index else "of size 0"
+        else:
+            where = f"of {index}"
+        expected = f"a partition {where} with {self.admissible_text()}, e.g. {self._example(index)}"
+        try:
+            node = parse_partition(text)
+        except PartitionError as exc:
+            raise self.label_error(text, index, expected) from exc
+        if not self.on_level(index, node):
+            raise self.label_error(text, index, expected)
+        return node
+
+    def _example(self, index: int) -> str:
+        lam: Partition = (index,) if index else ()
+        if not self.admissible(lam):  # (k) is not admissible only for O(1), where (1) or () is
+            lam = (1,) if index % 2 else ()
+        return format_partition(lam)
+
+    def sort_key(self, node: Partition, index: int = 0) -> tuple[int, ...]:
+        """Smaller partitions first; within one size, (k) first (reverse lexicographic)."""
+        return (sum(node),) + tuple(-x for x in node)
