@@ -3,7 +3,7 @@
 The number of paths from the root to a node is its multiplicity (Bratteli 1972; Goodman, de la
 Harpe, Jones, *Coxeter Graphs and Towers of Algebras*, 1989, ch. 2), and the paths index the
 Gelfand–Tsetlin basis of the centralizer's irreducible module (the construction of Gelfand and
-Tsetlin, 1950, for a chain of algebras with simple branching; Goodman, de la Harpe, Jones, §2.3).
+Tsetlin, 1950, for a chain of algebras with simple branching; Goodman, de la Harpe, Jones, ch. 2).
 
 **Edges.**  Where two nodes are joined by e > 1 edges, these are e distinct edges, numbered
 1..e.  A path is therefore a sequence of nodes (one per level index 0..L) *and* the number of the
@@ -18,7 +18,7 @@ Equivalently: read the steps from the node back to the root and compare lexicogr
 Each (parent, edge) pair owns a block of m(u) consecutive ranks, so ranking and unranking are
 sums over the levels of a mixed-radix number whose digits are weighted by multiplicities
 (the standard ranking of a combinatorial class by its counting recursion: Nijenhuis and Wilf,
-*Combinatorial Algorithms*, 2nd ed., 1978, ch. 13): no path is ever enumerated, so rank 10^30 is
+*Combinatorial Algorithms*, 2nd ed., 1978): no path is ever enumerated, so rank 10^30 is
 as quick as rank 0 once the levels are built.
 """
 

@@ -2,7 +2,7 @@
 
 V^{⊗k} ≅ ⊕_t S(k,t)·Ind_{S_{N−t}}^{S_N} 1 (the S_N-orbits on [N]^k are the set partitions of [k]
 into t ≤ N blocks) and Ind_{S_{N−t}}^{S_N} 1 holds S^λ f^{λ/(N−t)} times (Pieri rule: Macdonald,
-*Symmetric Functions and Hall Polynomials*, I.5; Sagan, *The Symmetric Group*, §2.9), so
+*Symmetric Functions and Hall Polynomials*, I.5), so
 m_λ(k) = Σ_t S(k,t)·f^{λ/(N−t)}.  A *set-partition tableau* of shape λ at level k realises one
 term of that sum: a set partition of {1,…,k} into t blocks, the blocks numbered 1..t in the order
 of their least elements, block j written in the box that holds j in a standard skew tableau of
@@ -14,7 +14,7 @@ placed in a standard skew tableau of shape μ/(N−1−t).
 1. by the number t of placed blocks, ascending;
 2. then by the set partition, as its restricted growth string a_1 a_2 … (a_i the number of the
    block holding i, blocks numbered by least element) in lexicographic order (Stanton and White,
-   *Constructive Combinatorics*, 1986, §3.3; Knuth, TAOCP 4A, §7.2.1.5);
+   *Constructive Combinatorics*, 1986; Knuth, TAOCP 4A, §7.2.1.5);
 3. then by the skew tableau: by the row of its largest entry, top row first, then recursively by
    the tableau left when that box is removed.
 

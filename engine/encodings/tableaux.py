@@ -7,7 +7,7 @@ one box.
   general-linear towers (Schur–Weyl duality: the paths index the Young seminormal basis).
 - ``updown``: a path that adds or removes one box per step is an up–down tableau, the sequence of
   boxes added and removed (for Brauer algebras: Goodman and Wallach, *Symmetry, Representations,
-  and Invariants*, 2009, §10.2 and §10.3; for partition algebras each whole step removes then
+  and Invariants*, 2009, ch. 10; for partition algebras each whole step removes then
   adds a box).
 
 Text forms (rows numbered from 1, the first row on top):

@@ -3,7 +3,7 @@ the family name whose encodings it exercises) and for towers with multiple edges
 
 Their graphs are the textbook ones: Young's lattice (Sagan, *The Symmetric Group*, §5.1), the
 stable Brauer branching graph (add or remove one box; Goodman and Wallach, *Symmetry,
-Representations, and Invariants*, §10.2), the stable walled Brauer graph on pairs of partitions
+Representations, and Invariants*, ch. 10), the stable walled Brauer graph on pairs of partitions
 (V adds a box to the first or removes one from the second, V* the reverse; common practice)."""
 
 from __future__ import annotations
