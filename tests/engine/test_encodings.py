@@ -104,7 +104,8 @@ def test_up_down_tableaux_in_the_stable_range():
             assert len(words) == A001147[k // 2]
         for shape in diagram.nodes(k):
             # dimension of the Brauer algebra's irreducible module in the stable range:
-            # C(k,|λ|)·(k−|λ|−1)!!·f^λ (Goodman and Wallach, Symmetry, Representations, and Invariants, ch. 10)
+            # C(k,|λ|)·(k−|λ|−1)!!·f^λ (from memory; Goodman and Wallach, Symmetry, Representations,
+            # and Invariants, ch. 10)
             free = k - sum(shape)
             assert free % 2 == 0
             expected = comb(k, sum(shape)) * A001147[free // 2] * hook_length_count(shape)
