@@ -9,8 +9,9 @@ g_p = Σ_{a=1}^{p−1} (a/p) ζ_p^a = √p for p ≡ 1 (mod 4) and i√p for p �
 
 A value is held as Σ_k c_k ζ_n^k with rational c_k (not unique); ``reduce`` takes the remainder
 modulo the cyclotomic polynomial Φ_n (irreducible over Q: Lang, *Algebra*, VI §3), which is
-unique, so equality and rationality are decided exactly.  The remainder is computed with sympy,
-imported only when a value is first reduced.
+unique, so equality and rationality are decided exactly.  Φ_n and the remainder are computed in
+pure Python (sympy takes seconds to import); tests/engine/test_algebraic.py holds both against
+sympy's ``cyclotomic_poly`` and ``Poly.rem``.
 """
 
 from __future__ import annotations
@@ -163,17 +164,50 @@ class Cyc:
     __repr__ = __str__
 
 
+@lru_cache(maxsize=None)
+def cyclotomic_coefficients(n: int) -> tuple[int, ...]:
+    """Φ_n, constant term first: x^n − 1 divided by Φ_d for every proper divisor d of n
+    (x^n − 1 = Π_{d | n} Φ_d(x); Lang, *Algebra*, VI §3).  Pure Python, so that reading a table
+    does not import sympy (tests hold it against sympy's ``cyclotomic_poly``)."""
+    poly = [-1] + [0] * (n - 1) + [1]
+    for d in range(1, n):
+        if n % d == 0:
+            poly = _divide_exactly(poly, list(cyclotomic_coefficients(d)))
+    return tuple(poly)
+
+
+def _divide_exactly(num: list[int], den: list[int]) -> list[int]:
+    """Quotient of integer polynomials (constant first) by a monic divisor that divides exactly."""
+    num = num[:]
+    out = [0] * (len(num) - len(den) + 1)
+    for shift in range(len(out) - 1, -1, -1):
+        q = num[shift + len(den) - 1]
+        out[shift] = q
+        if q:
+            for k, c in enumerate(den):
+                num[shift + k] -= q * c
+    assert not any(num), "not an exact division"
+    return out
+
+
 @lru_cache(maxsize=4096)
 def _remainder(n: int, terms: tuple[tuple[int, Fraction], ...]) -> tuple[Fraction, ...]:
-    """Coefficients of Σ c_k x^k mod Φ_n(x), computed exactly with sympy polynomials over Q."""
-    from sympy import Poly, QQ, symbols
-    from sympy.polys.specialpolys import cyclotomic_poly
-
-    x = symbols("x")
-    p = Poly({(k,): QQ(c.numerator, c.denominator) for k, c in terms}, x, domain=QQ)
-    r = p.rem(Poly(cyclotomic_poly(n, x), x, domain=QQ))
-    coeffs = [Fraction(int(c.numerator), int(c.denominator)) for c in reversed(r.all_coeffs())]
-    return tuple(coeffs) if any(coeffs) else ()
+    """Coefficients (constant first) of Σ c_k x^k modulo the monic Φ_n(x), exactly over Q."""
+    phi = cyclotomic_coefficients(n)
+    degree = len(phi) - 1
+    top = max(k for k, _ in terms)
+    coeffs = [Fraction(0)] * (max(top, degree) + 1)
+    for k, c in terms:
+        coeffs[k] += c
+    for k in range(len(coeffs) - 1, degree - 1, -1):
+        lead = coeffs[k]
+        if lead:
+            base = k - degree
+            for j, c in enumerate(phi):
+                if c:
+                    coeffs[base + j] -= lead * c
+    rest = coeffs[:degree]
+    return tuple(rest) if any(rest) else ()
 
 
 def _squarefree_split(m: int) -> tuple[int, int]:

@@ -42,3 +42,29 @@ def test_exact_identities():
 def test_bad_entries_are_refused(bad, words):
     with pytest.raises(AlgebraicError, match=words):
         parse_number(bad)
+
+
+def test_cyclotomic_reduction_agrees_with_sympy():
+    # Φ_n and remainders modulo Φ_n against sympy's cyclotomic_poly and Poly.rem (sympy)
+    from fractions import Fraction
+
+    from sympy import Poly, QQ, symbols
+    from sympy.polys.specialpolys import cyclotomic_poly
+
+    from engine.cyclotomic import Cyc, cyclotomic_coefficients
+
+    x = symbols("x")
+    for n in list(range(1, 40)) + [60, 84, 105]:
+        ref = Poly(cyclotomic_poly(n, x), x).all_coeffs()
+        assert list(cyclotomic_coefficients(n)) == [int(c) for c in reversed(ref)]
+        terms = {k: Fraction((3 * k * k + 1) % 7 - 3, 1 + k % 4) for k in range(n)}
+        ours = Cyc(n, terms).reduce()[1]
+        rem = Poly({(k,): QQ(c.numerator, c.denominator) for k, c in terms.items()}, x, domain=QQ).rem(
+            Poly(cyclotomic_poly(n, x), x, domain=QQ))
+        theirs = [Fraction(int(c.numerator), int(c.denominator)) for c in reversed(rem.all_coeffs())]
+        while theirs and theirs[-1] == 0:
+            theirs.pop()
+        mine = list(ours)
+        while mine and mine[-1] == 0:
+            mine.pop()
+        assert mine == theirs, n
