@@ -1,6 +1,5 @@
 """Built-in character tables and the McKay matrices computed from them."""
 
-from itertools import product
 
 import pytest
 

@@ -7,7 +7,6 @@ Representations of Finite Groups*, 2.3).  Entries are exact, in Q(√d) (a small
 """
 
 from fractions import Fraction
-from itertools import permutations
 
 import pytest
 
