@@ -16,7 +16,7 @@ Goodman, de la Harpe, Jones, *Coxeter Graphs and Towers of Algebras*, 1989, 2.1)
 from __future__ import annotations
 
 from dataclasses import dataclass
-from typing import Sequence
+from typing import Hashable, Sequence
 
 from engine.errors import UserError
 from engine.tower import Edge, Tower
@@ -24,12 +24,19 @@ from engine.tower import Edge, Tower
 
 @dataclass(frozen=True)
 class NodeSet:
+    """Named irreducible modules with their dimensions.  ``values`` (optional) are the node values
+    the tower hands out in their place (e.g. partitions as tuples); by default the labels."""
+
     name: str
     labels: tuple[str, ...]
     dimensions: tuple[int, ...]
+    values: tuple[Hashable, ...] | None = None
 
     def index(self, label: str) -> int:
         return self.labels.index(label)
+
+    def node(self, i: int) -> Hashable:
+        return self.labels[i] if self.values is None else self.values[i]
 
 
 @dataclass(frozen=True)
@@ -71,30 +78,32 @@ class MatrixTower(Tower):
         for a, b in zip(pattern, list(pattern[1:]) + [pattern[0]]):
             if a.target != b.source:
                 raise UserError(f"{spec}: step {a.name!r} ends in {a.target.name!r} but {b.name!r} starts in {b.source.name!r}")
-        if root not in pattern[0].source.labels:
-            raise UserError(f"{spec}: the root {root!r} is not a node of {pattern[0].source.name!r}")
+        first = pattern[0].source
+        if root not in first.labels:
+            raise UserError(f"{spec}: the root {root!r} is not a node of {first.name!r}")
         self.family = family
         self.pattern = tuple(pattern)
         self.steps_per_unit = len(pattern)
-        self._root = root
+        self._root = first.node(first.index(root))
         self._kinds = tuple(kinds)
         self._constants = [s.constant() for s in pattern]
         self._edges = [
             {
-                step.source.labels[i]: [(step.target.labels[j], m) for j, m in enumerate(row) if m]
+                step.source.node(i): [(step.target.node(j), m) for j, m in enumerate(row) if m]
                 for i, row in enumerate(step.matrix)
             }
             for step in pattern
         ]
         self._reverse = [
             {
-                step.target.labels[j]: [(step.source.labels[i], row[j]) for i, row in enumerate(step.matrix) if row[j]]
+                step.target.node(j): [(step.source.node(i), row[j]) for i, row in enumerate(step.matrix) if row[j]]
                 for j in range(len(step.target.labels))
             }
             for step in pattern
         ]
-        self._dims = [dict(zip(s.source.labels, s.source.dimensions)) for s in pattern]
-        self._order = [{label: k for k, label in enumerate(s.source.labels)} for s in pattern]
+        self._dims = [{s.source.node(i): d for i, d in enumerate(s.source.dimensions)} for s in pattern]
+        self._order = [{s.source.node(k): k for k in range(len(s.source.labels))} for s in pattern]
+        self._labels = {s.source.node(k): label for s in pattern for k, label in enumerate(s.source.labels)}
 
     def node_set(self, index: int) -> NodeSet:
         return self.pattern[index % len(self.pattern)].source
@@ -105,18 +114,18 @@ class MatrixTower(Tower):
     def level_kind(self, index: int) -> str:
         return self._kinds[index % len(self._kinds)] if self._kinds else self.node_set(index).name
 
-    def root(self) -> str:
+    def root(self) -> Hashable:
         return self._root
 
-    def children(self, index: int, node: str) -> Sequence[Edge]:
+    def children(self, index: int, node: Hashable) -> Sequence[Edge]:
         return self._edges[index % len(self.pattern)][node]
 
-    def parents(self, index: int, node: str) -> Sequence[Edge]:
+    def parents(self, index: int, node: Hashable) -> Sequence[Edge]:
         if index == 0:
             return []
         return self._reverse[(index - 1) % len(self.pattern)].get(node, [])
 
-    def dimension(self, index: int, node: str) -> int:
+    def dimension(self, index: int, node: Hashable) -> int:
         return self._dims[index % len(self.pattern)][node]
 
     def tensor_dimension(self, index: int) -> int:
@@ -133,18 +142,22 @@ class MatrixTower(Tower):
         per_step = max(sum(len(v) for v in edges.values()) for edges in self._edges)
         return per_step * (upto + 1)
 
-    def format(self, node: str) -> str:
-        return node
+    def format(self, node: Hashable) -> str:
+        return self._labels[node]
 
-    def parse(self, text: str, index: int) -> str:
-        label = text.strip()
+    def parse(self, text: str, index: int) -> Hashable:
+        label = self.normalize_label(text.strip())
         nodes = self.node_set(index)
         if label not in nodes.labels:
             shown = ", ".join(nodes.labels[:12]) + (", ..." if len(nodes.labels) > 12 else "")
             raise self.label_error(text, index, f"one of {shown}")
-        return label
+        return nodes.node(nodes.index(label))
 
-    def sort_key(self, node: str, index: int = 0) -> object:
+    def normalize_label(self, text: str) -> str:
+        """Hook for subclasses that accept several spellings of a label."""
+        return text
+
+    def sort_key(self, node: Hashable, index: int = 0) -> object:
         return self._order[index % len(self.pattern)].get(node, 0)
 
     def mckay_matrix(self, step: int = 0) -> Step:

@@ -163,8 +163,14 @@ class SymmetricTower(Tower):
         return tuple(-x for x in node)
 
 
-def _build(spec: str, params: dict[str, str]) -> SymmetricTower:
+def _build(spec: str, params: dict[str, str]) -> Tower:
     n = int_param("symmetric", params, "n", minimum=1)
+    if "module" in params:
+        from engine.families.characters import symmetric_module_tower
+
+        if "halves" in params:
+            raise SpecError("symmetric: halves= applies to the permutation module only; drop it when module= is given")
+        return symmetric_module_tower(spec, n, params["module"])
     halves = choice_param("symmetric", params, "halves", ("yes", "no"), "yes") == "yes"
     if n > 400:
         raise SpecError(f"symmetric: n={n} is too large (at most 400)")
@@ -174,7 +180,12 @@ def _build(spec: str, params: dict[str, str]) -> SymmetricTower:
 FAMILY = Family(
     name="symmetric",
     summary="S_N on its permutation module C^N; centralizers: partition algebras P_k(N), half levels S_{N-1}",
-    keys={"n": "N, the degree (N ≥ 1)", "halves": "yes (default) or no: hide the half levels"},
+    keys={
+        "n": "N, the degree (N ≥ 1)",
+        "halves": "yes (default) or no: hide the half levels",
+        "module": "V as a partition or a sum of partitions of N, e.g. (5,1) or (4)+(3,1) or 2*(3,1); "
+        "the tower is then built from the character table of S_N (Murnaghan–Nakayama), whole levels only, N ≤ 14",
+    },
     build=_build,
     required=("n",),
     rank=10,

@@ -1,0 +1,70 @@
+"""The exact number reader, against sympy's own exact values."""
+
+import pytest
+import sympy
+
+from engine.algebraic import AlgebraicError, parse_number, parse_sympy
+
+
+@pytest.mark.parametrize("text, reference", [
+    ("(1+sqrt(5))/2", sympy.GoldenRatio),
+    ("unity(5)+unity(5,4)", 2 * sympy.cos(2 * sympy.pi / 5)),
+    ("sqrt(-3)", sympy.I * sympy.sqrt(3)),
+    ("unity(3)^-1", sympy.exp(-2 * sympy.pi * sympy.I / 3)),
+    ("sqrt(12)/2 - 3/4", sympy.sqrt(3) - sympy.Rational(3, 4)),
+    ("i^3 + 2*i", sympy.I),
+    ("-unity(8)^2", -sympy.I),
+    ("sqrt(1/3)", 1 / sympy.sqrt(3)),
+])
+def test_values_agree_with_sympy(text, reference):
+    # both our cyclotomic value and the sympy tree equal sympy's reference to 40 digits
+    ours = complex(parse_number(text).to_sympy().evalf(40))
+    tree = complex(parse_sympy(text).evalf(40))
+    ref = complex(sympy.N(reference, 40))
+    assert abs(ours - ref) < 1e-30 and abs(tree - ref) < 1e-30
+
+
+def test_exact_identities():
+    # Gauss sum: ζ5 + ζ5^4 − ζ5^2 − ζ5^3 = √5 (Ireland and Rosen, 6.3); 1 + ζ3 + ζ3² = 0
+    assert parse_number("unity(5)+unity(5,4)-unity(5,2)-unity(5,3)") == parse_number("sqrt(5)")
+    assert parse_number("1+unity(3)+unity(3,2)").rational() == 0
+    assert parse_number("sqrt(2)^2").rational() == 2
+    assert parse_number("sqrt(2)").rational() is None
+    assert parse_number(7).rational() == 7
+
+
+@pytest.mark.parametrize("bad, words", [
+    ("", "empty"), ("1+", "ends too early"), ("x", "unexpected 'x'"), ("1/0", "division by zero"),
+    ("2^(1/2)", "whole-number exponent"), ("1/sqrt(2)", "divisor must be rational"),
+    ("sqrt(i)", "argument of sqrt must be rational"), ("__import__('os')", "unexpected"),
+    ("(1+2", r"expected '\)'"), ("unity(0)", "1 ≤ n"),
+])
+def test_bad_entries_are_refused(bad, words):
+    with pytest.raises(AlgebraicError, match=words):
+        parse_number(bad)
+
+
+def test_cyclotomic_reduction_agrees_with_sympy():
+    # Φ_n and remainders modulo Φ_n against sympy's cyclotomic_poly and Poly.rem (sympy)
+    from fractions import Fraction
+
+    from sympy import Poly, QQ, symbols
+    from sympy.polys.specialpolys import cyclotomic_poly
+
+    from engine.cyclotomic import Cyc, cyclotomic_coefficients
+
+    x = symbols("x")
+    for n in list(range(1, 40)) + [60, 84, 105]:
+        ref = Poly(cyclotomic_poly(n, x), x).all_coeffs()
+        assert list(cyclotomic_coefficients(n)) == [int(c) for c in reversed(ref)]
+        terms = {k: Fraction((3 * k * k + 1) % 7 - 3, 1 + k % 4) for k in range(n)}
+        ours = Cyc(n, terms).reduce()[1]
+        rem = Poly({(k,): QQ(c.numerator, c.denominator) for k, c in terms.items()}, x, domain=QQ).rem(
+            Poly(cyclotomic_poly(n, x), x, domain=QQ))
+        theirs = [Fraction(int(c.numerator), int(c.denominator)) for c in reversed(rem.all_coeffs())]
+        while theirs and theirs[-1] == 0:
+            theirs.pop()
+        mine = list(ours)
+        while mine and mine[-1] == 0:
+            mine.pop()
+        assert mine == theirs, n
