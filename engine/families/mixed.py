@@ -10,7 +10,7 @@ to β or removed from α; every result admissible.  Level i of the tower is the 
 letters; there are len(W) + 1 levels.
 
 Dimensions by Weyl's dimension formula (engine.classical_dimensions).  The walled Brauer algebra
-B_{r,s}(N) (Turaev 1989; Koike 1989; Benkart, Chakrabarti, Halverson, Leduc, Lee and Stroomer,
+B_{r,s}(N) (Turaev 1989; Koike 1989;
 *Tensor product representations of general linear groups and their connections with Brauer
 algebras*, J. Algebra 166, 1994), for r letters v and s letters d, has dimension (r+s)! and maps onto
 the centralizer, injectively exactly while r + s ≤ N.

@@ -50,7 +50,7 @@ def test_stable_range_squares_are_factorials(word):
 
 @pytest.mark.parametrize("n", [1, 2, 3, 4])
 def test_faithful_exactly_while_r_plus_s_at_most_n(n):
-    # common practice (walled Brauer algebras, Benkart et al. 1994): the kernel appears at r+s = N+1
+    # common practice (walled Brauer algebras; J. Algebra 166, 1994): the kernel appears at r+s = N+1
     d = Diagram(parse_spec(f"mixed:n={n},word=vdvvdvdd"))
     assert d.first_unfaithful(8) == n + 1
 
