@@ -18,7 +18,7 @@ from tui.widgets.sums_bar import SumsLine
 #: levels with at most this many nodes get their dimension column sized exactly
 EXACT_COLUMNS_UP_TO = 2000
 #: narrowest level pane, in cells (border included)
-MIN_PANE_WIDTH = 17
+MIN_PANE_WIDTH = 16
 
 
 def level_text(diagram: Diagram, index: int) -> str:
