@@ -91,15 +91,19 @@ class ExplorerApp(App[None]):
         except Exception as exc:  # noqa: BLE001 - report, never crash the explorer
             self.post_message(BuildFailed(request, f"building failed: {type(exc).__name__}: {exc}"))
 
+    def _drawable(self) -> bool:
+        """False while the main screen is not (or no longer) mounted, e.g. during shutdown."""
+        return bool(self.main.is_attached and self.main.query("#progress"))
+
     @on(BuildProgress)
     def _build_progress(self, message: BuildProgress) -> None:
-        if message.request == self._request:
-            level = format_level(self.state.tower.level_of(self._wanted[1]))
-            self.main.show_progress(message.done, message.total, f"building to level {level}… Esc stops")
+        if message.request == self._request and self._pending is not None and self._drawable():
+            level = format_level(self.state.tower.level_of(self._pending))
+            self.main.show_progress(message.done, message.total, f"building level {level}… Esc stops")
 
     @on(LevelsReady)
     def _levels_ready(self, message: LevelsReady) -> None:
-        if message.request != self._request:
+        if message.request != self._request or not self._drawable():
             return
         self._pending = None
         self.state.index, self.state.node = message.index, message.node
@@ -111,7 +115,7 @@ class ExplorerApp(App[None]):
 
     @on(BuildFailed)
     def _build_failed(self, message: BuildFailed) -> None:
-        if message.request != self._request:
+        if message.request != self._request or not self._drawable():
             return
         self._pending = None
         self.main.hide_progress()
@@ -151,7 +155,7 @@ class ExplorerApp(App[None]):
         known = self._faithful.get(message.spec)
         if known is None or known[1] is None and message.upto > known[0] or message.first is not None:
             self._faithful[message.spec] = (message.upto, message.first)
-        if message.spec == self.state.spec:
+        if message.spec == self.state.spec and self._drawable():
             self.main.redraw_sums()
 
     # ----- moving ---------------------------------------------------------------------------------------

@@ -17,8 +17,8 @@ def digit_count(n: int) -> int:
     n = abs(n)
     if n < 10**18:
         return len(str(n))
-    guess = int(n.bit_length() * math.log10(2))  # floor(log10 n) or one below
-    return guess + 1 if n < 10 ** (guess + 1) else guess + 2
+    guess = int(n.bit_length() * math.log10(2))  # floor(log10 n) or one above it
+    return guess if n < 10**guess else guess + 1
 
 
 def short_int(n: int, width: int = 8) -> str:

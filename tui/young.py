@@ -82,7 +82,8 @@ def draw_shape(shape: Shape, max_width: int, max_height: int) -> list[str]:
             return draw_boxes(shape, cell)
     if cols <= max_width and rows <= max_height:
         return ["▪" * part for part in shape]
-    return [f"{sum(shape)} boxes in {rows} rows, {cols} wide: too large to draw here"]
+    row_word = "row" if rows == 1 else "rows"
+    return [f"{sum(shape)} boxes in {rows} {row_word}, {cols} wide: too large to draw here"]
 
 
 def draw_label(label: str, max_width: int, max_height: int) -> list[str]:

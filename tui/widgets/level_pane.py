@@ -126,6 +126,19 @@ class LevelPane(ScrollView, can_focus=False):
             strip = self._strips[key] = self._format(rows, row, width, on_cursor)
         return strip
 
+    @staticmethod
+    def _columns(rows: LevelRows, width: int) -> tuple[int, int]:
+        """Widths of the multiplicity and dimension columns: full, then shorter numbers, then no
+        dimension (the details pane has it), so that a narrow pane keeps some of the label; the
+        same for every row of the pane, so the columns line up."""
+        want = 2 + 8  # the marks and eight cells of label
+        choices = ((rows.m_width, rows.d_width), (min(rows.m_width, 6), min(rows.d_width, 5)),
+                   (min(rows.m_width, 6), 0))
+        for m_width, d_width in choices:
+            if want + 1 + m_width + (1 + d_width if d_width else 0) <= width:
+                return m_width, d_width
+        return choices[-1]
+
     def _format(self, rows: LevelRows, row: int, width: int, on_cursor: bool) -> Strip:
         node = rows.nodes[row]
         marks = self.marks
@@ -133,13 +146,12 @@ class LevelPane(ScrollView, can_focus=False):
         first = "▶" if on_cursor else (" " if edges is None else (str(edges) if edges < 10 else "+"))
         second = "•" if node == marks.path_node and marks.path_node is not None else " "
         flags = ("*" if node in marks.bookmarked else "") + ("✎" if node in marks.noted else "")
-        m_text = short_int(rows.multiplicity.get(node, 0), rows.m_width)
-        d_text = short_int(rows.dimension(node), rows.d_width)
-        numbers = f" {m_text:>{rows.m_width}} {d_text:>{rows.d_width}}"
-        if cell_len(numbers) + 4 > width:  # narrow: drop the alignment, keep both numbers
-            numbers = f" {m_text} {d_text}"
-        room = max(width - 2 - cell_len(numbers), 1)
         label = rows.label(node) + flags
+        m_width, d_width = self._columns(rows, width)
+        numbers = f" {short_int(rows.multiplicity.get(node, 0), m_width):>{m_width}}"
+        if d_width:
+            numbers += f" {short_int(rows.dimension(node), d_width):>{d_width}}"
+        room = max(width - 2 - cell_len(numbers), 1)
         if cell_len(label) > room:
             label = label[: max(room - 1, 0)] + "…"
         text = f"{first}{second}{label}".ljust(2 + room) + numbers
