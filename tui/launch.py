@@ -1,9 +1,29 @@
-"""Start the explorer (imports textual only here)."""
+"""Start the explorer: ``towerscope`` (the demo session), ``open FILE``, ``explore SPEC``.
+
+Everything is checked before the terminal is taken over, so a bad file or spec is one line on
+stderr (exit 2) rather than a screen that flashes and closes.
+"""
 
 from __future__ import annotations
 
-from engine.errors import UserError
+import sys
+from pathlib import Path
 
 
 def launch(session_file: str | None = None, spec: str | None = None) -> int:
-    raise UserError("the explorer is not available yet")
+    sys.set_int_max_str_digits(0)
+    from tui.session_files import demo_session_path, read_session
+    from tui.state import state_for_spec
+
+    demo = False
+    if spec is not None:
+        state = state_for_spec(spec)
+    elif session_file is not None:
+        state = read_session(Path(session_file).expanduser().resolve())
+    else:
+        state = read_session(demo_session_path())
+        demo = True
+    from tui.app import ExplorerApp
+
+    ExplorerApp(state, demo=demo).run()
+    return 0

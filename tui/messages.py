@@ -1,14 +1,55 @@
-"""App-wide messages, as small dataclasses."""
+"""App-wide messages, as small dataclasses.  Workers post them; handlers on the app change state."""
 
 from __future__ import annotations
 
 from dataclasses import dataclass
+from typing import Any
 
 from textual.message import Message
 
 
 @dataclass
 class PathShown(Message):
-    """A path browser shows a path: ``path`` holds its nodes, one per level index 0..index."""
+    """A path to highlight in the level panes: its nodes, one per level index 0, 1, 2, ...
+    Posted by the path browser whenever the path it shows changes."""
 
-    path: list
+    path: list[Any]
+
+
+@dataclass
+class BuildProgress(Message):
+    """Progress of a build: ``done`` out of ``total`` (any unit)."""
+
+    request: int
+    done: float
+    total: float
+
+    def can_replace(self, message: Message) -> bool:
+        return isinstance(message, BuildProgress)
+
+
+@dataclass
+class LevelsReady(Message):
+    """The levels around ``index`` are built and sorted; the view may move there."""
+
+    request: int
+    index: int
+    node: Any
+
+
+@dataclass
+class BuildFailed(Message):
+    """A build ended without a result: cancelled, refused as too large, or failed."""
+
+    request: int
+    reason: str
+    cancelled: bool = False
+
+
+@dataclass
+class FaithfulFound(Message):
+    """Where the centralizer stops being faithful, searched up to ``upto``: ``first`` or None."""
+
+    spec: str
+    upto: int
+    first: int | None

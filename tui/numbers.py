@@ -1,0 +1,54 @@
+"""How numbers are shown: short in the level panes, exact (and wrapped) in the details pane.
+
+Presentation only.  Python 3.11 refuses ``str()`` of ints beyond 4,300 digits unless the limit is
+lifted (the app lifts it at start); these helpers also avoid writing out enormous numbers at all.
+"""
+
+from __future__ import annotations
+
+import math
+
+#: beyond this many digits the details pane shows the number's head and tail only
+EXACT_DIGITS_SHOWN = 3000
+
+
+def digit_count(n: int) -> int:
+    """Number of decimal digits of |n| (1 for 0), without converting huge ints to text."""
+    n = abs(n)
+    if n < 10**18:
+        return len(str(n))
+    guess = int(n.bit_length() * math.log10(2))  # floor(log10 n) or one above it
+    return guess if n < 10**guess else guess + 1
+
+
+def short_int(n: int, width: int = 8) -> str:
+    """``n`` in at most ``width`` cells: exact when it fits, else ``3.18e41``."""
+    if n < 0:
+        return "-" + short_int(-n, max(width - 1, 5))
+    if n < 10**width:
+        return str(n)
+    digits = digit_count(n)
+    exponent = digits - 1
+    tail = f"e{exponent}"
+    mantissa_digits = max(1, width - len(tail) - 1)  # digits of the mantissa, one before the point
+    head = n // 10 ** (digits - mantissa_digits)
+    text = str(head)
+    if len(text) > 1:
+        text = text[0] + "." + text[1:]
+    return text + tail
+
+
+def exact_int(n: int) -> str:
+    """All digits of ``n`` with thin grouping by threes; very long numbers show head … tail."""
+    digits = digit_count(n)
+    if digits > EXACT_DIGITS_SHOWN:
+        head = n // 10 ** (digits - 60)
+        tail = n % 10**60
+        return f"{head}…{tail:060d} ({digits:,} digits)"
+    return f"{n:,}".replace(",", " ") if digits <= 30 else str(n)
+
+
+def wrap_text(text: str, width: int) -> list[str]:
+    """Cut a long unbroken string (an exact number) into lines of ``width`` cells."""
+    width = max(width, 1)
+    return [text[i : i + width] for i in range(0, len(text), width)] or [""]

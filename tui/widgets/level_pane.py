@@ -1,0 +1,166 @@
+"""One level of the diagram as a virtualized list (Line API): only the visible rows are formatted.
+
+A row reads ``▶• label*✎   m  dim``: the first cell is the selection (``▶``) or, in a
+neighbouring pane, the number of edges joining the node to the selected one (``1``…``9``, ``+``);
+the second marks a highlighted path (``•``); after the label ``*`` marks a bookmark and ``✎`` a
+note.  Numbers are right-aligned and shortened (``3.18e41``); the details pane has them exact.
+"""
+
+from __future__ import annotations
+
+from dataclasses import dataclass, field
+from typing import Any, Callable
+
+from rich.cells import cell_len
+from rich.segment import Segment
+from textual.cache import LRUCache
+from textual.geometry import Region, Size
+from textual.scroll_view import ScrollView
+from textual.strip import Strip
+
+from tui.numbers import short_int
+
+
+@dataclass
+class LevelRows:
+    """The rows of one level, lazily: nodes in display order, multiplicities, labels, dimensions."""
+
+    index: int
+    nodes: list[Any]
+    multiplicity: dict[Any, int]
+    label: Callable[[Any], str]
+    dimension: Callable[[Any], int]
+    #: cells for the multiplicity and dimension columns
+    m_width: int = 8
+    d_width: int = 7
+    title: str = ""
+
+    def __len__(self) -> int:
+        return len(self.nodes)
+
+
+@dataclass
+class PaneMarks:
+    """What the pane marks besides its rows: the selection, links to it, a path, bookmarks, notes."""
+
+    cursor: int | None = None
+    links: dict[Any, int] = field(default_factory=dict)
+    path_node: Any = None
+    bookmarked: frozenset[Any] = frozenset()
+    noted: frozenset[Any] = frozenset()
+
+
+class LevelPane(ScrollView, can_focus=False):
+    """A level's nodes; the main screen sets rows and marks, the pane draws the visible lines."""
+
+    COMPONENT_CLASSES = {"level-pane--cursor", "level-pane--link", "level-pane--path"}
+
+    DEFAULT_CSS = """
+    LevelPane { overflow-x: hidden; scrollbar-size-vertical: 1; }
+    LevelPane > .level-pane--cursor { text-style: reverse bold; }
+    LevelPane > .level-pane--link { text-style: bold; }
+    LevelPane > .level-pane--path { text-style: underline; }
+    """
+
+    def __init__(self, **kwargs: Any) -> None:
+        super().__init__(**kwargs)
+        self.rows: LevelRows | None = None
+        self.marks = PaneMarks()
+        self._generation = 0
+        self._strips: LRUCache[tuple[int, int, int, bool], Strip] = LRUCache(2048)
+
+    # ----- data in ------------------------------------------------------------------------------------
+    def show(self, rows: LevelRows | None, marks: PaneMarks) -> None:
+        """New rows (or none) and marks; keeps the scroll position when the level is the same."""
+        same_level = rows is not None and self.rows is not None and rows.index == self.rows.index
+        self.rows = rows
+        self.marks = marks
+        self._generation += 1
+        self._strips.clear()
+        self.virtual_size = Size(0, 0 if rows is None else len(rows))
+        if not same_level:
+            self.scroll_to(y=0, animate=False, immediate=True)
+        self.border_title = "" if rows is None else f"{rows.title} · {len(rows):,}"
+        self.refresh()
+
+    def move_cursor(self, cursor: int) -> None:
+        """Move the selection only: repaint two lines, scroll it into view."""
+        old = self.marks.cursor
+        self.marks.cursor = cursor
+        for row in (old, cursor):
+            if row is not None:
+                self.refresh_line(row - self.scroll_offset.y)
+        self.scroll_to_center_if_needed(cursor)
+
+    def scroll_to_center_if_needed(self, row: int) -> None:
+        height = self.scrollable_content_region.height or 1
+        top = self.scroll_offset.y
+        if not top <= row < top + height:
+            self.scroll_to(y=max(0, row - height // 2), animate=False, immediate=True)
+        else:
+            self.scroll_to_region(Region(0, row, 1, 1), animate=False, immediate=True)
+
+    # ----- drawing ------------------------------------------------------------------------------------
+    def notify_style_update(self) -> None:
+        super().notify_style_update()
+        self._strips.clear()
+
+    def render_line(self, y: int) -> Strip:
+        width = self.scrollable_content_region.width
+        row = self.scroll_offset.y + y
+        try:
+            return self._line(row, width)
+        except Exception as exc:  # noqa: BLE001 - a drawing fault must never end the app
+            return Strip([Segment(f"! {type(exc).__name__}"[:width], self.rich_style)]).adjust_cell_length(
+                width, self.rich_style
+            )
+
+    def _line(self, row: int, width: int) -> Strip:
+        rows = self.rows
+        if rows is None or row >= len(rows) or width <= 0:
+            return Strip.blank(width, self.rich_style)
+        on_cursor = row == self.marks.cursor
+        key = (row, width, self._generation, on_cursor)
+        strip = self._strips.get(key)
+        if strip is None:
+            strip = self._strips[key] = self._format(rows, row, width, on_cursor)
+        return strip
+
+    @staticmethod
+    def _columns(rows: LevelRows, width: int) -> tuple[int, int]:
+        """Widths of the multiplicity and dimension columns: full, then shorter numbers, then no
+        dimension (the details pane has it), so that a narrow pane keeps some of the label; the
+        same for every row of the pane, so the columns line up."""
+        want = 2 + 8  # the marks and eight cells of label
+        choices = ((rows.m_width, rows.d_width), (min(rows.m_width, 6), min(rows.d_width, 5)),
+                   (min(rows.m_width, 6), 0))
+        for m_width, d_width in choices:
+            if want + 1 + m_width + (1 + d_width if d_width else 0) <= width:
+                return m_width, d_width
+        return choices[-1]
+
+    def _format(self, rows: LevelRows, row: int, width: int, on_cursor: bool) -> Strip:
+        node = rows.nodes[row]
+        marks = self.marks
+        edges = marks.links.get(node)
+        first = "▶" if on_cursor else (" " if edges is None else (str(edges) if edges < 10 else "+"))
+        second = "•" if node == marks.path_node and marks.path_node is not None else " "
+        flags = ("*" if node in marks.bookmarked else "") + ("✎" if node in marks.noted else "")
+        label = rows.label(node) + flags
+        m_width, d_width = self._columns(rows, width)
+        numbers = f" {short_int(rows.multiplicity.get(node, 0), m_width):>{m_width}}"
+        if d_width:
+            numbers += f" {short_int(rows.dimension(node), d_width):>{d_width}}"
+        room = max(width - 2 - cell_len(numbers), 1)
+        if cell_len(label) > room:
+            label = label[: max(room - 1, 0)] + "…"
+        text = f"{first}{second}{label}".ljust(2 + room) + numbers
+        style = self.rich_style
+        if on_cursor:
+            style = style + self.get_component_rich_style("level-pane--cursor")
+        elif edges is not None:
+            style = style + self.get_component_rich_style("level-pane--link")
+        elif second != " ":
+            style = style + self.get_component_rich_style("level-pane--path")
+        return Strip([Segment(text, style)]).adjust_cell_length(width, style if on_cursor else self.rich_style)
+
