@@ -210,12 +210,6 @@ class ExplorerApp(App[None]):
     def _path_shown(self, message: PathShown) -> None:
         self.highlight_path(message.path)
 
-    def on_path_browser_shown(self, message: Any) -> None:
-        """The path browser's own message, read by its ``path`` attribute only."""
-        path = getattr(message, "path", None)
-        if isinstance(path, list) and not isinstance(message, PathShown):
-            self.highlight_path(path)
-
     # ----- dialogs --------------------------------------------------------------------------------------
     def ask_level(self) -> None:
         tower = self.state.tower
