@@ -6,7 +6,9 @@ post messages; only the handlers here change the state, then ask the main screen
 
 from __future__ import annotations
 
+import gc
 import sys
+import time
 from typing import Any, Iterable
 
 from textual import on, work
@@ -48,8 +50,21 @@ class ExplorerApp(App[None]):
         self._faithful: dict[str, tuple[int, int | None]] = {}
 
     def on_mount(self) -> None:
+        # Rendering leaves cyclic garbage (cached strips refer to themselves); a full collection
+        # walks every tracked object and stalls a key press for 50-150 ms on a deep level. Run full
+        # collections ten times less often, and one whenever the explorer has been idle a second.
+        gc.set_threshold(700, 10, 100)
+        self.set_interval(1.0, self._collect_when_idle)
+        self._last_key = 0.0
         self.push_screen(self.main)
         self.go(self.state.index, self.state.node)
+
+    def on_key(self) -> None:
+        self._last_key = time.monotonic()
+
+    def _collect_when_idle(self) -> None:
+        if time.monotonic() - self._last_key > 1.0 and gc.get_count()[1] > 0:
+            gc.collect()
 
     # ----- building levels ------------------------------------------------------------------------------
     def go(self, index: int, node: Node | None = None, toward: tuple[int, Node] | None = None) -> None:
@@ -111,6 +126,10 @@ class ExplorerApp(App[None]):
         self.cursor = None if message.node is None else nodes.index(message.node)
         self.main.hide_progress()
         self.main.redraw()
+        # A deep level holds millions of long-lived objects; move them out of the cyclic garbage
+        # collector's sight so that its full passes do not stall key presses (they are still freed
+        # by reference counting when the diagram goes).
+        gc.freeze()
         self._start_faithful_search()
 
     @on(BuildFailed)

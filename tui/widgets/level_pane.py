@@ -67,7 +67,9 @@ class LevelPane(ScrollView, can_focus=False):
         self.rows: LevelRows | None = None
         self.marks = PaneMarks()
         self._generation = 0
-        self._strips: LRUCache[tuple[int, int, int, bool], Strip] = LRUCache(2048)
+        # A few screens' worth of lines: every Strip carries several small caches that the cyclic
+        # garbage collector must walk, so a larger cache makes its full passes stall key presses.
+        self._strips: LRUCache[tuple[int, int, int, bool], Strip] = LRUCache(256)
 
     # ----- data in ------------------------------------------------------------------------------------
     def show(self, rows: LevelRows | None, marks: PaneMarks) -> None:
