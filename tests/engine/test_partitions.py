@@ -66,12 +66,27 @@ def test_bounded_counts_against_enumeration():
                 assert partition_count(n, k, length) == expected
 
 
+def count_by_largest_entry(p):
+    """Standard tableaux counted by where the largest entry n sits (a removable corner), recursively:
+    a direct count of the fillings, independent of any product formula."""
+    if sum(p) == 0:
+        return 1
+    total = 0
+    for i in range(len(p)):
+        if i == len(p) - 1 or p[i] > p[i + 1]:
+            smaller = tuple(x for x in p[:i] + (p[i] - 1,) + p[i + 1:] if x)
+            total += count_by_largest_entry(smaller)
+    return total
+
+
 def test_hook_length_formula_against_brute_force():
-    # Frame-Robinson-Thrall hook length formula checked by direct enumeration, all n <= 8
+    # Frame-Robinson-Thrall hook length formula checked by direct enumeration of the fillings,
+    # every partition of n <= 8 (by trying every filling order for n <= 7; by the largest entry for 8)
     for n in range(0, 9):
         for p in partitions_of(n):
-            if n <= 7 or len(p) <= 3:
+            if n <= 7:
                 assert standard_tableaux_count(p) == brute_force_standard_tableaux(p), p
+            assert standard_tableaux_count(p) == count_by_largest_entry(p), p
             assert standard_tableaux_count(p) * hook_length_product(p) == factorial(n)
 
 
