@@ -12,7 +12,8 @@ import pkgutil
 from dataclasses import dataclass, field
 from typing import Callable
 
-from engine.errors import SpecError
+from engine.errors import SpecError, UserError
+from engine.text import split_outside_parentheses
 from engine.tower import Tower
 
 
@@ -60,7 +61,11 @@ def split_spec(spec: str) -> tuple[str, dict[str, str]]:
     name = name.strip()
     params: dict[str, str] = {}
     if rest.strip():
-        for item in _split_top_level(rest):
+        try:
+            items = split_outside_parentheses(rest, lambda ch: ch == ",")
+        except UserError as exc:
+            raise SpecError(f"in spec {spec!r}: {exc}") from None
+        for item in items:
             key, eq, value = item.partition("=")
             key = key.strip()
             if not eq or not key:
@@ -69,28 +74,6 @@ def split_spec(spec: str) -> tuple[str, dict[str, str]]:
                 raise SpecError(f"in spec {spec!r}: key {key!r} given twice")
             params[key] = value.strip()
     return name, params
-
-
-def _split_top_level(text: str) -> list[str]:
-    items: list[str] = []
-    depth = 0
-    current: list[str] = []
-    for ch in text:
-        if ch in "([":
-            depth += 1
-        elif ch in ")]":
-            depth -= 1
-            if depth < 0:
-                raise SpecError(f"unbalanced parentheses in {text!r}")
-        if ch == "," and depth == 0:
-            items.append("".join(current))
-            current = []
-        else:
-            current.append(ch)
-    if depth != 0:
-        raise SpecError(f"unbalanced parentheses in {text!r}")
-    items.append("".join(current))
-    return [i for i in items if i.strip()]
 
 
 def parse_spec(spec: str) -> Tower:

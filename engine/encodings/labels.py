@@ -19,6 +19,7 @@ from engine.encodings.base import Encoding
 from engine.errors import UserError
 from engine.levels import format_level
 from engine.paths import Path, PathError
+from engine.text import split_outside_parentheses
 from engine.tower import Tower
 
 _EDGE = re.compile(r"^(.*)#(\d+)$")
@@ -27,27 +28,10 @@ _EDGE = re.compile(r"^(.*)#(\d+)$")
 def split_labels(text: str) -> list[str]:
     """Tokens separated by spaces, commas or arrows outside parentheses."""
     body = text.replace("→", " ").replace("->", " ")
-    tokens: list[str] = []
-    current: list[str] = []
-    depth = 0
-    for ch in body:
-        if ch in "([":
-            depth += 1
-        elif ch in ")]":
-            depth -= 1
-            if depth < 0:
-                raise PathError(f"unbalanced parentheses in {text!r}")
-        if depth == 0 and (ch.isspace() or ch == ","):
-            if current:
-                tokens.append("".join(current))
-                current = []
-        else:
-            current.append(ch)
-    if depth != 0:
-        raise PathError(f"unbalanced parentheses in {text!r}")
-    if current:
-        tokens.append("".join(current))
-    return tokens
+    try:
+        return split_outside_parentheses(body, lambda ch: ch.isspace() or ch == ",")
+    except UserError as exc:
+        raise PathError(str(exc)) from None
 
 
 class LabelSequence(Encoding):
