@@ -192,8 +192,7 @@ class Diagram:
         """The nodes of a level in the tower's display order."""
         found = self._sorted.get(index)
         if found is None:
-            key = self.tower.sort_key
-            found = sorted(self.level(index), key=lambda node: key(node, index))
+            found = self.tower.sort_nodes(self.level(index), index)
             self._sorted[index] = found
         return found
 

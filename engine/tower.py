@@ -20,7 +20,7 @@ from __future__ import annotations
 
 from abc import ABC, abstractmethod
 from fractions import Fraction
-from typing import Hashable, Sequence
+from typing import Hashable, Iterable, Sequence
 
 from engine.errors import LabelError
 
@@ -127,6 +127,11 @@ class Tower(ABC):
     def sort_key(self, node: Node, index: int = 0) -> object:
         """Order of nodes within level ``index``."""
         return node
+
+    def sort_nodes(self, nodes: Iterable[Node], index: int) -> list[Node]:
+        """The nodes of level ``index`` in display order (by ``sort_key``; a family may do it faster)."""
+        key = self.sort_key
+        return sorted(nodes, key=lambda node: key(node, index))
 
     def label_error(self, text: str, index: int, expected: str) -> LabelError:
         from engine.levels import format_level

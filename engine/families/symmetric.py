@@ -14,7 +14,7 @@ dimension: the partition algebra P_k(N) has dimension Bell(2k), P_{k+1/2}(N) has
 from __future__ import annotations
 
 from math import isqrt
-from typing import Sequence
+from typing import Iterable, Sequence
 
 from engine.combinatorics import bell, stirling2_row
 from engine.errors import SpecError
@@ -160,7 +160,13 @@ class SymmetricTower(Tower):
         return node
 
     def sort_key(self, node: Partition, index: int = 0) -> tuple[int, ...]:
+        """Reverse lexicographic order: (4), (3,1), (2,2), (2,1,1), (1,1,1,1)."""
         return tuple(-x for x in node)
+
+    def sort_nodes(self, nodes: Iterable[Partition], index: int) -> list[Partition]:
+        # all nodes of a level have the same size, so reverse lexicographic order is plain
+        # tuple order reversed (no key function: several times faster on 200,000 nodes)
+        return sorted(nodes, reverse=True)
 
 
 def _build(spec: str, params: dict[str, str]) -> Tower:

@@ -124,3 +124,11 @@ def test_closed_form_at_deep_levels_obeys_the_branching_recursion():
     assert via_parents == tower.multiplicity(index, nu) == d.multiplicity(index, nu)
     value = tower.multiplicity(2 * 100_000, (6, 3, 3))
     assert value.bit_length() > 300_000
+
+
+def test_fast_node_order_is_the_sort_key_order():
+    tower = parse_spec("symmetric:n=7")
+    d = Diagram(tower)
+    for index in range(12):
+        level = list(d.level(index))
+        assert d.nodes(index) == sorted(level, key=lambda p: tower.sort_key(p, index))
