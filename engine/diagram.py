@@ -263,11 +263,21 @@ class Diagram:
 
     def first_unfaithful(self, upto: int, cancel: CancelToken | None = None) -> int | None:
         """The first level index ≤ upto where Σm² falls below the generic dimension (there the
-        diagram algebra stops acting faithfully), or None."""
-        for index in range(upto + 1):
-            if self.tower.generic_dimension(index) is None:
-                return None
-            if not self.sums(index, cancel=cancel).faithful:
-                return index
-        return None
+        diagram algebra stops acting faithfully), or None.
 
+        Faithfulness only fails upwards: A_k sits in A_{k+1} compatibly with V^{⊗k} in V^{⊗(k+1)}
+        (the towers are inclusions; Goodman, de la Harpe, Jones 1989, ch. 2), so an element acting as
+        zero at level k still does at k+1.  Hence a binary search: O(log upto) levels' sums.
+        """
+        if self.tower.generic_dimension(0) is None:
+            return None
+        if self.sums(upto, cancel=cancel).faithful:
+            return None
+        low, high = 0, upto  # faithful below low is unknown; unfaithful at high
+        while low < high:
+            middle = (low + high) // 2
+            if self.sums(middle, cancel=cancel).faithful:
+                low = middle + 1
+            else:
+                high = middle
+        return high

@@ -67,3 +67,14 @@ def test_parents_without_a_family_rule_invert_children():
     for index in range(1, 9):
         for node in d.nodes(index):
             assert d.parents(index, node) == reference.parents(index, node)
+
+
+def test_first_unfaithful_level_agrees_with_a_scan():
+    # the binary search against a level-by-level scan of Σm² against the generic dimension
+    for spec in ["symmetric:n=5", "general-linear:n=3", "orthogonal:n=2", "symplectic:n=4", "mixed:n=2,word=vdvdvd"]:
+        d = Diagram(parse_spec(spec))
+        top = min(10, d.tower.max_index or 10)
+        scan = next((i for i in range(top + 1) if not d.sums(i).faithful), None)
+        assert d.first_unfaithful(top) == scan
+        for upto in range(top + 1):
+            assert d.first_unfaithful(upto) == (scan if scan is not None and scan <= upto else None)
