@@ -13,7 +13,8 @@ _ESCAPES = {"\\": r"\textbackslash{}", "{": r"\{", "}": r"\}", "_": r"\_", "^": 
             "%": r"\%", "$": r"\$", "#": r"\#", "~": r"\~{}"}
 
 
-def _tex(text: str) -> str:
+def tex_escape(text: str) -> str:
+    """Text set verbatim in LaTeX: its special characters escaped."""
     return "".join(_ESCAPES.get(ch, ch) for ch in text)
 
 
@@ -21,7 +22,7 @@ def to_tikz(diagram: Diagram, upto: int, x_step: float = 1.6, y_step: float = 1.
     tower = diagram.tower
     diagram.ensure(upto)
     lines = [
-        f"% Bratteli diagram of {_tex(tower.spec)}, levels 0 to {format_level(tower.level_of(upto))}",
+        f"% Bratteli diagram of {tex_escape(tower.spec)}, levels 0 to {format_level(tower.level_of(upto))}",
         "\\begin{tikzpicture}[every node/.style={font=\\small, align=center}]",
     ]
     names: dict[tuple[int, object], str] = {}
@@ -37,7 +38,7 @@ def to_tikz(diagram: Diagram, upto: int, x_step: float = 1.6, y_step: float = 1.
             x = (k - offset) * x_step
             lines.append(
                 f"  \\node ({name}) at ({x:.2f},{y:.2f}) "
-                f"{{{_tex(tower.format(node))}\\\\[-2pt]\\scriptsize {level[node]}}};"
+                f"{{{tex_escape(tower.format(node))}\\\\[-2pt]\\scriptsize {level[node]}}};"
             )
     for index in range(upto):
         for node in diagram.nodes(index):

@@ -7,11 +7,11 @@ import sys
 
 from tui.cli_support import DelayedProgress, level_index, open_diagram
 
-FORMATS = ("dot", "csv", "json", "tikz")
+FORMATS = ("dot", "csv", "json", "tikz", "latex")
 
 
 def add_commands(sub: argparse._SubParsersAction) -> None:
-    p = sub.add_parser("export", help="write levels 0..K as Graphviz DOT, CSV, JSON or TikZ")
+    p = sub.add_parser("export", help="write levels 0..K as Graphviz DOT, CSV, JSON, a TikZ picture or a LaTeX table")
     p.add_argument("spec", help="a tower spec, e.g. symmetric:n=4")
     p.add_argument("--to", required=True, metavar="K", help="the last level")
     p.add_argument("--format", required=True, choices=FORMATS, help="the file format")
@@ -28,6 +28,10 @@ def render(diagram, upto: int, fmt: str) -> str:
         from engine.export.csv_levels import to_csv
 
         return to_csv(diagram, upto)
+    if fmt == "latex":
+        from engine.export.latex_table import to_latex_table
+
+        return to_latex_table(diagram, upto)
     if fmt == "tikz":
         from engine.export.tikz import to_tikz
 
