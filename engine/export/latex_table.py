@@ -5,19 +5,9 @@ Plain ``tabular`` with ``booktabs`` rules (the booktabs package documentation)."
 
 from __future__ import annotations
 
-from fractions import Fraction
-
 from engine.diagram import Diagram
-from engine.export.tikz import tex_escape
+from engine.export.tikz import level_tex, tex_escape
 from engine.levels import format_level
-
-
-def _level(level: Fraction) -> str:
-    """``2`` or ``$2\\tfrac{1}{2}$`` (and ``$\\tfrac{1}{2}$`` for one half)."""
-    whole, rest = divmod(level, 1)
-    if rest == 0:
-        return str(int(whole))
-    return f"${int(whole) or ''}\\tfrac{{{rest.numerator}}}{{{rest.denominator}}}$"
 
 
 def to_latex_table(diagram: Diagram, upto: int) -> str:
@@ -39,7 +29,7 @@ def to_latex_table(diagram: Diagram, upto: int) -> str:
         cells = " + ".join(
             (f"{level[node]}\\," if level[node] > 1 else "") + tex_escape(tower.format(node)) for node in diagram.nodes(index)
         )
-        row = f"{_level(tower.level_of(index))} & {cells} & {sums.squares}"
+        row = f"${level_tex(tower.level_of(index))}$ & {cells} & {sums.squares}"
         if generic:
             row += f" & {sums.generic_dimension}"
         lines.append(row + " \\\\")

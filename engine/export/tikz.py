@@ -6,6 +6,8 @@ edges with a count above 1 carry that count.  The output is a ``tikzpicture`` en
 
 from __future__ import annotations
 
+from fractions import Fraction
+
 from engine.diagram import Diagram
 from engine.levels import format_level
 
@@ -18,6 +20,14 @@ def tex_escape(text: str) -> str:
     return "".join(_ESCAPES.get(ch, ch) for ch in text)
 
 
+def level_tex(level: Fraction) -> str:
+    """``2`` or ``2\\frac{1}{2}`` (math mode; plain LaTeX)."""
+    whole, rest = divmod(level, 1)
+    if rest == 0:
+        return str(int(whole))
+    return f"{int(whole) or ''}\\frac{{{rest.numerator}}}{{{rest.denominator}}}"
+
+
 def to_tikz(diagram: Diagram, upto: int, x_step: float = 1.6, y_step: float = 1.5) -> str:
     tower = diagram.tower
     diagram.ensure(upto)
@@ -26,11 +36,13 @@ def to_tikz(diagram: Diagram, upto: int, x_step: float = 1.6, y_step: float = 1.
         "\\begin{tikzpicture}[every node/.style={font=\\small, align=center}]",
     ]
     names: dict[tuple[int, object], str] = {}
+    widest = max(len(diagram.level(i)) for i in range(upto + 1))
+    label_x = -((widest - 1) / 2 + 0.8) * x_step  # left of the widest level
     for index in range(upto + 1):
         level = diagram.level(index)
         nodes = diagram.nodes(index)
         y = -index * y_step
-        lines.append(f"  \\node[anchor=east] at ({-x_step:.2f},{y:.2f}) {{$k={format_level(tower.level_of(index))}$}};")
+        lines.append(f"  \\node[anchor=east] at ({label_x:.2f},{y:.2f}) {{$k={level_tex(tower.level_of(index))}$}};")
         offset = (len(nodes) - 1) / 2
         for k, node in enumerate(nodes):
             name = f"n{index}x{k}"
