@@ -111,6 +111,11 @@ class Tower(ABC):
         Must return 0 for nodes without a path."""
         return None
 
+    def estimate_digits(self, index: int) -> int | None:
+        """An upper estimate of the decimal digits of the numbers that ``multiplicity`` (the closed
+        form) works with at this level, or None when it has no closed form or they stay small."""
+        return None
+
     def estimate_edges(self, upto: int) -> int | None:
         """An upper estimate of the edges walked to build levels 0..upto, or None if small."""
         return None

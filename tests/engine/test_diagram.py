@@ -67,3 +67,15 @@ def test_parents_without_a_family_rule_invert_children():
     for index in range(1, 9):
         for node in d.nodes(index):
             assert d.parents(index, node) == reference.parents(index, node)
+
+
+def test_closed_form_guard_refuses_huge_numbers_before_computing():
+    # S_12 at level 10^10: the multiplicities are near 12^(10^10), about 1.08·10^10 digits
+    # (common practice: Σ m·dim = N^k); refused at once instead of running for hours
+    d = Diagram(parse_spec("symmetric:n=12"))
+    with pytest.raises(TooLarge, match=r"1\.08e\+10 digits"):
+        d.multiplicity(2 * 10**10, (6, 3, 3))
+    with pytest.raises(TooLarge, match="digits"):
+        Diagram(parse_spec("alternating:n=6")).multiplicity(2 * 10**10, ((3, 3), ""))
+    # under the limit the closed form still answers: S_2, m_(2)(k) = 2^(k−1) (common practice)
+    assert Diagram(parse_spec("symmetric:n=2")).multiplicity(2 * 300_000, (2,)) == 2 ** 299_999
