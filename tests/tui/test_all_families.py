@@ -66,3 +66,23 @@ async def test_step_move_and_browse_paths(spec: str) -> None:
         await settle(pilot)
         assert not isinstance(app.screen, PathBrowser)
         assert (app.state.index, app.state.node) == (index, node)
+
+
+@pytest.mark.parametrize("spec", [f.example for f in families().values()])
+async def test_tower_form_shows_every_key_in_full_at_80x24(spec: str) -> None:
+    # each key's help is the family's own text (engine/specs.py): wrapped, never cut at the border
+    app = app_on(spec, search_faithful=False)
+    async with app.run_test(size=(80, 24)) as pilot:
+        await settle(pilot)
+        await pilot.press("t")
+        await settle(pilot)
+        dialog = app.screen.query_one(".tower-dialog")
+        inner = dialog.content_region
+        labels = list(dialog.query(".key-label"))
+        assert len(labels) == len(parse_spec_family(spec).keys)
+        for label in labels:
+            assert label.region.right <= inner.right, str(label.render())
+
+
+def parse_spec_family(spec: str):  # noqa: ANN201 - a Family
+    return families()[spec.split(":")[0]]
