@@ -50,6 +50,8 @@ class Tower(ABC):
         from engine.errors import UserError
         from engine.levels import format_level
 
+        if level < 0:
+            raise UserError(f"{self.spec} has no level {format_level(level)} (levels start at 0)")
         scaled = level * self.steps_per_unit
         if scaled.denominator != 1:
             kind = "integer and half levels" if self.steps_per_unit == 2 else "integer levels only"

@@ -5,7 +5,7 @@ import threading
 import pytest
 
 from engine.diagram import Diagram
-from engine.errors import Cancelled, TooLarge
+from engine.errors import Cancelled, TooLarge, UserError
 from engine.specs import parse_spec
 
 
@@ -79,3 +79,15 @@ def test_closed_form_guard_refuses_huge_numbers_before_computing():
         Diagram(parse_spec("alternating:n=6")).multiplicity(2 * 10**10, ((3, 3), ""))
     # under the limit the closed form still answers: S_2, m_(2)(k) = 2^(k−1) (common practice)
     assert Diagram(parse_spec("symmetric:n=2")).multiplicity(2 * 300_000, (2,)) == 2 ** 299_999
+
+
+def test_negative_levels_are_refused_not_read_from_the_end():
+    # levels start at 0 (cli-contract.md); Python's negative indices must not leak through
+    d = Diagram(parse_spec("symmetric:n=4"))
+    d.ensure(4)
+    with pytest.raises(UserError, match="levels start at 0"):
+        d.level(-1)
+    with pytest.raises(UserError, match="levels start at 0"):
+        d.multiplicity(-2, (3, 1))
+    with pytest.raises(UserError, match="levels start at 0"):
+        Diagram(parse_spec("mixed:n=3,word=vd")).level(-1)
