@@ -91,3 +91,38 @@ def test_negative_levels_are_refused_not_read_from_the_end():
         d.multiplicity(-2, (3, 1))
     with pytest.raises(UserError, match="levels start at 0"):
         Diagram(parse_spec("mixed:n=3,word=vd")).level(-1)
+
+
+def test_reading_while_a_worker_builds_gives_the_same_numbers():
+    # the explorer reads built levels (children, parents, sums) on the UI thread while a worker
+    # builds deeper ones; the result must equal a build on one thread (common practice: the
+    # numbers do not depend on who asks first)
+    spec = "symmetric:n=12"
+    shared = Diagram(parse_spec(spec))
+    shared.ensure(6)
+    errors = []
+
+    def build():
+        try:
+            shared.ensure(22)
+        except Exception as exc:  # noqa: BLE001 - reported below
+            errors.append(exc)
+
+    worker = threading.Thread(target=build)
+    worker.start()
+    while worker.is_alive():
+        top = shared.built
+        for index in range(max(1, top - 2), top + 1):
+            for node in shared.nodes(index)[:40]:
+                shared.children(index, node)
+                shared.parents(index, node)
+                shared.multiplicity(index, node)
+            shared.sums(index)
+    worker.join()
+    assert not errors
+    alone = Diagram(parse_spec(spec))
+    for index in range(23):
+        assert shared.level(index) == alone.level(index)
+        assert shared.sums(index) == alone.sums(index)
+        for node in alone.nodes(index)[:20]:
+            assert shared.children(index, node) == alone.children(index, node)
