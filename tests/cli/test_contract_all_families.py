@@ -318,6 +318,7 @@ ERRORS = [
     ("node", "symmetric:n=12", "--level", "10000000000", "--label", "(6,3,3)"),
     ("node", "general-linear:n=2", "--level", "1000000", "--label", "(500000,500000)"),
     ("paths", "symmetric:n=12", "--level", "100000", "--label", "(6,3,3)"),
+    ("tableaux", "symmetric:n=12", "--level", "10000000000", "--label", "(6,3,3)"),
     # command-line usage
     ("levels", "symmetric:n=4", "--to", "3", "--json", "--csv"),
     ("export", "symmetric:n=4", "--to", "3", "--format", "png", "-o", "x.png"),
