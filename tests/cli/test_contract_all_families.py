@@ -288,6 +288,8 @@ ERRORS = [
     ("levels", "characters", "--to", "2"),
     ("levels", "characters:group=dihedral(5),module=zz", "--to", "2"),
     ("levels", "characters:group=symmetric(30)", "--to", "2"),
+    ("levels", "characters:group=cyclic(99999999),module=x1", "--to", "2"),
+    ("levels", "characters:group=dihedral(99999999),module=r1", "--to", "2"),
     # bad levels
     ("levels", "symmetric:n=4", "--to", "-1"),
     ("levels", "symmetric:n=4", "--to", "1/3"),
