@@ -23,6 +23,10 @@ from engine.partitions import Partition, format_partition, partitions_of
 
 #: S_n tables are dense p(n) × p(n); beyond this their McKay matrices take too long
 MAX_SYMMETRIC_DEGREE = 14
+#: built-in cyclic and dihedral tables are checked and decomposed exactly, in time growing like
+#: the cube of the number of classes: C_40 and D_64 take a few seconds, C_120 well over a minute
+MAX_CYCLIC_ORDER = 40
+MAX_DIHEDRAL_DEGREE = 64
 
 
 def centralizer_order(mu: Partition) -> int:
@@ -83,6 +87,11 @@ def symmetric_table(n: int) -> CharacterTable:
 def cyclic_table(n: int) -> CharacterTable:
     if n < 1:
         raise UserError(f"a cyclic group needs order n ≥ 1, not {n}")
+    if n > MAX_CYCLIC_ORDER:
+        raise UserError(
+            f"the built-in cyclic tables go up to order {MAX_CYCLIC_ORDER}, not {n} "
+            "(a cyclic group of any order up to 2000 on C^2: su2:kind=cyclic,m=M)"
+        )
     return CharacterTable(
         name=f"C_{n}",
         order=n,
@@ -97,6 +106,8 @@ def dihedral_table(n: int) -> CharacterTable:
     """D_n of order 2n, n ≥ 3."""
     if n < 3:
         raise UserError(f"the dihedral group D_n (order 2n) needs n ≥ 3, not {n}")
+    if n > MAX_DIHEDRAL_DEGREE:
+        raise UserError(f"the built-in dihedral tables go up to D_{MAX_DIHEDRAL_DEGREE} (order {2 * MAX_DIHEDRAL_DEGREE}), not D_{n}")
     half = (n - 1) // 2 if n % 2 else n // 2 - 1
     rotations = list(range(1, half + 1))
     classes = ["1"] + (["r^" + str(n // 2)] if n % 2 == 0 else []) + [f"r^{k}" if k > 1 else "r" for k in rotations]

@@ -49,7 +49,22 @@ def _exact(num: int, den: int) -> int:
 
 @lru_cache(maxsize=200_000)
 def general_linear_dimension(n: int, lam: Partition) -> int:
-    """dim of the GL_n-module V_λ by the hook-content formula (0 when λ has more than n rows)."""
+    """dim of the GL_n-module V_λ (0 when λ has more than n rows).
+
+    By the hook-content formula (one factor per cell), or, when λ has many more cells than
+    n², by Weyl's formula Π_{i<j≤n} (λ_i − λ_j + j − i)/(j − i) (one factor per pair of rows;
+    Fulton and Harris, *Representation Theory*, 15.17): deep levels have huge partitions.
+    """
+    if len(lam) > n:
+        return 0
+    if n * n < sum(lam):
+        rows = lam + (0,) * (n - len(lam))
+        num = den = 1
+        for i in range(n):
+            for j in range(i + 1, n):
+                num *= rows[i] - rows[j] + j - i
+                den *= j - i
+        return _exact(num, den)
     return _exact(*_cell_product(lam, lambda i, j: n + j - i))
 
 

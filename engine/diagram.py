@@ -22,6 +22,10 @@ from engine.tower import Edge, Node, Tower
 
 #: default size guard: refuse builds estimated to walk more edges than this
 DEFAULT_EDGE_LIMIT = 50_000_000
+#: default size guard for closed forms: refuse when their numbers would pass this many digits
+#: (a 100,000-digit answer takes well under a second; CPython turns a million digits into text
+#: in about ten seconds, and the time grows with the square of the length)
+DEFAULT_DIGIT_LIMIT = 600_000
 
 Progress = Callable[[float, float], None]
 
@@ -59,9 +63,12 @@ _CHECK_EVERY = 2048
 class Diagram:
     """Levels of a tower as mappings node → multiplicity (exact ints), built on demand."""
 
-    def __init__(self, tower: Tower, edge_limit: int = DEFAULT_EDGE_LIMIT) -> None:
+    def __init__(
+        self, tower: Tower, edge_limit: int = DEFAULT_EDGE_LIMIT, digit_limit: int = DEFAULT_DIGIT_LIMIT
+    ) -> None:
         self.tower = tower
         self.edge_limit = edge_limit
+        self.digit_limit = digit_limit
         root = tower.root()
         # Nodes are numbered as they are first met; levels and the edge cache work on the numbers
         # (small-int keys hash and compare faster than tuples), the public view maps them back.
@@ -99,6 +106,21 @@ class Diagram:
                 f"would walk about {estimate:.2e} edges, over the limit of {self.edge_limit:.0e}; "
                 "ask for a lower level, or for one node (the node command uses a closed form where "
                 "the family has one)"
+            )
+
+    def check_digits(self, index: int) -> None:
+        """Raise TooLarge when the tower's closed form at ``index`` would work with numbers of more
+        than ``digit_limit`` digits (and the level is not built, so it would be used)."""
+        if index <= self.built:
+            return
+        digits = self.tower.estimate_digits(index)
+        if digits is not None and digits > self.digit_limit:
+            from engine.levels import format_level
+
+            raise TooLarge(
+                f"the closed form for {self.tower.spec} at level {format_level(self.tower.level_of(index))} "
+                f"would work with numbers of about {digits:.2e} digits, over the limit of "
+                f"{self.digit_limit:.0e}; ask for a lower level"
             )
 
     def ensure(self, index: int, progress: Progress | None = None, cancel: CancelToken | None = None) -> None:
@@ -203,6 +225,7 @@ class Diagram:
         if index <= self.built:
             ident = self._ids.get(node)
             return 0 if ident is None else self._levels[index].get(ident, 0)
+        self.check_digits(index)
         closed = self.tower.multiplicity(index, node)
         if closed is not None:
             return closed

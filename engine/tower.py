@@ -50,6 +50,8 @@ class Tower(ABC):
         from engine.errors import UserError
         from engine.levels import format_level
 
+        if level < 0:
+            raise UserError(f"{self.spec} has no level {format_level(level)} (levels start at 0)")
         scaled = level * self.steps_per_unit
         if scaled.denominator != 1:
             kind = "integer and half levels" if self.steps_per_unit == 2 else "integer levels only"
@@ -109,6 +111,11 @@ class Tower(ABC):
     def multiplicity(self, index: int, node: Node) -> int | None:
         """A closed form for the number of paths to ``node``, or None when the family has none.
         Must return 0 for nodes without a path."""
+        return None
+
+    def estimate_digits(self, index: int) -> int | None:
+        """An upper estimate of the decimal digits of the numbers that ``multiplicity`` (the closed
+        form) works with at this level, or None when it has no closed form or they stay small."""
         return None
 
     def estimate_edges(self, upto: int) -> int | None:

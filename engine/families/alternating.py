@@ -122,6 +122,9 @@ class AlternatingTower(Tower):
             return m if sign else 0
         return m + self.symmetric.multiplicity(index, conjugate(lam))
 
+    def estimate_digits(self, index: int) -> int:
+        return self.symmetric.estimate_digits(index)
+
     def estimate_edges(self, upto: int) -> int:
         return self.symmetric.estimate_edges(upto)
 

@@ -10,7 +10,7 @@ given by the hook-content formula (engine.classical_dimensions).  CS_k has dimen
 
 from __future__ import annotations
 
-from math import factorial
+from math import factorial, lgamma, log
 
 from engine.classical_dimensions import general_linear_dimension
 from engine.partition_tower import OneBoxTower, vector_dimension
@@ -43,6 +43,10 @@ class GeneralLinearTower(OneBoxTower):
 
     def algebra_name(self, index: int) -> str:
         return f"CS_{index}"
+
+    def estimate_digits(self, index: int) -> int:
+        """Digits of k!, the largest factor of the hook length formula (log10 k! by lgamma)."""
+        return int(lgamma(index + 1) / log(10)) + 1
 
     def multiplicity(self, index: int, node: Partition) -> int:
         """f^λ by the hook length formula (Schur–Weyl duality), 0 off the level."""

@@ -13,7 +13,7 @@ dimension: the partition algebra P_k(N) has dimension Bell(2k), P_{k+1/2}(N) has
 
 from __future__ import annotations
 
-from math import isqrt
+from math import isqrt, log10
 from typing import Iterable, Sequence
 
 from engine.combinatorics import bell, stirling2_row
@@ -124,6 +124,11 @@ class SymmetricTower(Tower):
             return sum(row[t + 1] * skew_tableaux_count(node, (top - t,) if top - t else ()) for t in range(top + 1))
         row = stirling2_row(k, self.n)
         return sum(row[t] * skew_tableaux_count(node, (self.n - t,) if self.n - t else ()) for t in range(self.n + 1))
+
+    def estimate_digits(self, index: int) -> int:
+        """Digits of N^(k+1) at most: the closed form sums terms C(t,j)·j^k (j ≤ t ≤ N), and the
+        multiplicity itself is at most N^k, the dimension of the tensor space."""
+        return int((self._k(index) + 1) * log10(self.n)) + 1
 
     def level_size(self, index: int) -> int:
         """Number of nodes with a path on a level: partitions (top−j, ν) with ν ⊢ j, ν_1 ≤ top−j."""

@@ -17,7 +17,10 @@ def write_text_atomic(path: str | os.PathLike[str], text: str) -> Path:
         raise UserError(f"cannot write {str(target)!r}: folder {str(folder)!r} does not exist")
     if target.is_dir():
         raise UserError(f"cannot write {str(target)!r}: it is a folder")
-    fd, temp = tempfile.mkstemp(prefix=f".{target.name}.", suffix=".tmp", dir=folder)
+    try:
+        fd, temp = tempfile.mkstemp(prefix=f".{target.name}.", suffix=".tmp", dir=folder)
+    except OSError as exc:  # a folder we may not write in (permissions, read-only or virtual file system)
+        raise UserError(f"cannot write {str(target)!r}: {exc.strerror or exc}") from exc
     try:
         with os.fdopen(fd, "w", encoding="utf-8", newline="") as handle:
             handle.write(text)

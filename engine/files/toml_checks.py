@@ -20,6 +20,10 @@ def load_toml(path: str | Path) -> dict[str, Any]:
         text = p.read_text(encoding="utf-8")
     except OSError as exc:
         raise FileFormatError(f"cannot read {str(p)!r}: {exc.strerror or exc}") from exc
+    except UnicodeDecodeError as exc:
+        raise FileFormatError(
+            f"{p.name}: not a TOML file (byte {exc.start} is not UTF-8 text; TOML files are UTF-8)"
+        ) from exc
     try:
         return tomllib.loads(text)
     except tomllib.TOMLDecodeError as exc:

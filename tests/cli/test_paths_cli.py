@@ -67,6 +67,13 @@ def test_text_output_lists_ranks(capsys):
     assert "0  -1 +2" in out and "┌" in out
 
 
+def test_count_zero_lists_nothing_and_says_so(capsys):
+    # (3,1) at level 3 of S_4 has 10 paths (the contract's example)
+    assert main(["paths", "symmetric:n=4", "--level", "3", "--label", "(3,1)", "--count", "0"]) == 0
+    out = capsys.readouterr().out
+    assert out.splitlines() == ["10 paths to (3,1) at level 3 of symmetric:n=4; none listed (--count 0)"]
+
+
 @pytest.mark.parametrize(
     "argv, message",
     [

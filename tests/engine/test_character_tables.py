@@ -103,3 +103,14 @@ def test_cyclic_module_sum_with_multiplicity():
     for k in range(9):
         assert sorted(ours.level(k).values()) == sorted(ref.level(k).values())
     assert Diagram(parse_spec("characters:group=cyclic(3),module=2*x0")).sums(3).weighted == 8
+
+
+def test_huge_built_in_tables_are_refused_at_once():
+    # C_N has N classes and D_N about N/2 (common practice); the exact checks grow like their cube
+    from engine.errors import UserError
+
+    with pytest.raises(UserError, match="up to order 40"):
+        cyclic_table(10**8)
+    with pytest.raises(UserError, match="up to D_64"):
+        dihedral_table(10**8)
+    assert len(cyclic_table(40).classes) == 40 and len(dihedral_table(64).classes) == 64 // 2 + 3

@@ -5,7 +5,7 @@ import threading
 import pytest
 
 from engine.diagram import Diagram
-from engine.errors import Cancelled, TooLarge
+from engine.errors import Cancelled, TooLarge, UserError
 from engine.specs import parse_spec
 
 
@@ -78,3 +78,62 @@ def test_first_unfaithful_level_agrees_with_a_scan():
         assert d.first_unfaithful(top) == scan
         for upto in range(top + 1):
             assert d.first_unfaithful(upto) == (scan if scan is not None and scan <= upto else None)
+
+
+def test_closed_form_guard_refuses_huge_numbers_before_computing():
+    # S_12 at level 10^10: the multiplicities are near 12^(10^10), about 1.08·10^10 digits
+    # (common practice: Σ m·dim = N^k); refused at once instead of running for hours
+    d = Diagram(parse_spec("symmetric:n=12"))
+    with pytest.raises(TooLarge, match=r"1\.08e\+10 digits"):
+        d.multiplicity(2 * 10**10, (6, 3, 3))
+    with pytest.raises(TooLarge, match="digits"):
+        Diagram(parse_spec("alternating:n=6")).multiplicity(2 * 10**10, ((3, 3), ""))
+    # under the limit the closed form still answers: S_2, m_(2)(k) = 2^(k−1) (common practice)
+    assert Diagram(parse_spec("symmetric:n=2")).multiplicity(2 * 300_000, (2,)) == 2 ** 299_999
+
+
+def test_negative_levels_are_refused_not_read_from_the_end():
+    # levels start at 0 (cli-contract.md); Python's negative indices must not leak through
+    d = Diagram(parse_spec("symmetric:n=4"))
+    d.ensure(4)
+    with pytest.raises(UserError, match="levels start at 0"):
+        d.level(-1)
+    with pytest.raises(UserError, match="levels start at 0"):
+        d.multiplicity(-2, (3, 1))
+    with pytest.raises(UserError, match="levels start at 0"):
+        Diagram(parse_spec("mixed:n=3,word=vd")).level(-1)
+
+
+def test_reading_while_a_worker_builds_gives_the_same_numbers():
+    # the explorer reads built levels (children, parents, sums) on the UI thread while a worker
+    # builds deeper ones; the result must equal a build on one thread (common practice: the
+    # numbers do not depend on who asks first)
+    spec = "symmetric:n=12"
+    shared = Diagram(parse_spec(spec))
+    shared.ensure(6)
+    errors = []
+
+    def build():
+        try:
+            shared.ensure(22)
+        except Exception as exc:  # noqa: BLE001 - reported below
+            errors.append(exc)
+
+    worker = threading.Thread(target=build)
+    worker.start()
+    while worker.is_alive():
+        top = shared.built
+        for index in range(max(1, top - 2), top + 1):
+            for node in shared.nodes(index)[:40]:
+                shared.children(index, node)
+                shared.parents(index, node)
+                shared.multiplicity(index, node)
+            shared.sums(index)
+    worker.join()
+    assert not errors
+    alone = Diagram(parse_spec(spec))
+    for index in range(23):
+        assert shared.level(index) == alone.level(index)
+        assert shared.sums(index) == alone.sums(index)
+        for node in alone.nodes(index)[:20]:
+            assert shared.children(index, node) == alone.children(index, node)

@@ -28,6 +28,7 @@ def run(args: argparse.Namespace) -> int:
     tower = diagram.tower
     index = level_index(tower, args.level)
     node = node_at(tower, index, args.label)
+    diagram.check_digits(index)
     if tower.multiplicity(index, node) is None:
         diagram.check_size(index)
         DelayedProgress(f"building {tower.spec}").run(lambda bar: diagram.ensure(index, progress=bar))

@@ -81,10 +81,8 @@ def run_paths(args: argparse.Namespace) -> int:
     shown = document["paths"]
     last = start + len(shown) - 1
     out = sys.stdout
-    out.write(
-        f"{total} paths to {tower.format(node)} at level {document['level']} of {tower.spec}; "
-        f"ranks {start}..{last} as {encoding.title} ({encoding.name})\n"
-    )
+    listed = f"ranks {start}..{last} as {encoding.title} ({encoding.name})" if shown else "none listed (--count 0)"
+    out.write(f"{total} paths to {tower.format(node)} at level {document['level']} of {tower.spec}; {listed}\n")
     width = len(str(last))
     for rank, path in zip(range(start, last + 1), paths.iterate(index, node, start)):
         text = encoding.path_text(tower, path)

@@ -28,6 +28,7 @@ def add_commands(sub: argparse._SubParsersAction) -> None:
 
 
 def run(args: argparse.Namespace) -> int:
+    from engine.diagram import Diagram
     from engine.errors import UserError
     from engine.levels import level_to_json
     from engine.paths import parse_rank
@@ -39,6 +40,7 @@ def run(args: argparse.Namespace) -> int:
         raise UserError(f"set-partition tableaux are for symmetric:n=N towers with half levels, not {tower.spec}")
     index = level_index(tower, args.level)
     node = node_at(tower, index, args.label)
+    Diagram(tower).check_digits(index)  # the count is the closed form: refuse what it cannot finish
     basis = SetPartitionTableaux(tower.n, index, node)
     total = basis.total
     if total == 0:

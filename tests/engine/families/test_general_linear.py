@@ -6,7 +6,7 @@ from math import factorial
 import pytest
 
 from engine.diagram import Diagram
-from engine.errors import LabelError, SpecError
+from engine.errors import LabelError, SpecError, TooLarge
 from engine.specs import parse_spec
 from tests.engine.families.tower_checks import (
     assert_labels_round_trip,
@@ -148,3 +148,20 @@ def test_level_30_in_the_stable_range_is_within_the_size_guard():
     # OEIS A000041: p(20) = 627 nodes
     assert len(d.level(20)) == 627
     assert d.sums(20).squares == factorial(20)
+
+
+def test_dimensions_of_partitions_with_many_cells_against_weyl():
+    # Weyl's dimension formula (tests/…/weyl_reference.py) on partitions with more cells than N²,
+    # where the engine switches from hook-content to a product over pairs of rows
+    tower = parse_spec("general-linear:n=3")
+    for lam in [(10,), (7, 3), (5, 4, 2), (9, 1, 1), (4, 4, 4)]:
+        assert tower.dimension(sum(lam), lam) == weyl_dimension("A", 3, lam)
+    # GL_2: V_(a,b) has dimension a − b + 1 (common practice: Sym^(a−b) ⊗ det^b)
+    assert parse_spec("general-linear:n=2").dimension(200_000, (100_001, 99_999)) == 3
+
+
+def test_deep_closed_form_is_refused_with_its_digit_estimate():
+    # log10(10^6 !) ≈ 5,565,709 (Stirling's formula, common practice): over the digit limit
+    d = Diagram(parse_spec("general-linear:n=2"))
+    with pytest.raises(TooLarge, match=r"5\.57e\+06 digits"):
+        d.multiplicity(10**6, (500_000, 500_000))
