@@ -79,6 +79,8 @@ class Diagram:
         self._children: dict[Hashable, dict[int, tuple[tuple[int, ...], tuple[int, ...] | None]]] = {}
         self._sorted: dict[int, list[Node]] = {}
         self._sums: dict[int, LevelSums] = {}
+        #: closed-form multiplicities asked for at levels not built (a few, kept briefly)
+        self._closed: dict[tuple[int, Node], int] = {}
         self._reverse: dict[int, dict[Node, list[Edge]]] = {}
         self._lock = threading.RLock()
         self._id_lock = threading.Lock()
@@ -225,13 +227,24 @@ class Diagram:
         if index <= self.built:
             ident = self._ids.get(node)
             return 0 if ident is None else self._levels[index].get(ident, 0)
+        key = (index, node)
+        if key in self._closed:
+            return self._closed[key]
         self.check_digits(index)
         closed = self.tower.multiplicity(index, node)
         if closed is not None:
+            if len(self._closed) > 256:
+                self._closed.clear()
+            self._closed[key] = closed
             return closed
         return self.level(index).get(node, 0)
 
-    def has_node(self, index: int, node: Node) -> bool:
+    def reachable(self, index: int, node: Node) -> bool:
+        """Whether ``node`` has a path from the root (by the family's rule where it has one)."""
+        if index > self.built:
+            answer = self.tower.reachable(index, node)
+            if answer is not None:
+                return answer
         return self.multiplicity(index, node) > 0
 
     def children(self, index: int, node: Node) -> list[Edge]:
@@ -254,7 +267,7 @@ class Diagram:
                 prev = self.level(index - 1)
                 found = [(p, e) for p, e in candidates if p in prev]
             else:
-                found = [(p, e) for p, e in candidates if self.multiplicity(index - 1, p) > 0]
+                found = [(p, e) for p, e in candidates if self.reachable(index - 1, p)]
             return sorted(found, key=lambda pe: self.tower.sort_key(pe[0], index - 1))
         reverse = self._reverse.get(index)
         if reverse is None:

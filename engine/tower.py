@@ -108,6 +108,11 @@ class Tower(ABC):
         """Name of that diagram algebra at this level, e.g. ``P_3(4)``."""
         return None
 
+    @property
+    def has_closed_form(self) -> bool:
+        """True when the family overrides ``multiplicity`` with a closed form."""
+        return type(self).multiplicity is not Tower.multiplicity
+
     def multiplicity(self, index: int, node: Node) -> int | None:
         """A closed form for the number of paths to ``node``, or None when the family has none.
         Must return 0 for nodes without a path."""
@@ -116,6 +121,11 @@ class Tower(ABC):
     def estimate_digits(self, index: int) -> int | None:
         """An upper estimate of the decimal digits of the numbers that ``multiplicity`` (the closed
         form) works with at this level, or None when it has no closed form or they stay small."""
+        return None
+
+    def reachable(self, index: int, node: Node) -> bool | None:
+        """Whether ``node`` has a path from the root, decided without counting, or None when the
+        family cannot say (the diagram then counts)."""
         return None
 
     def estimate_edges(self, upto: int) -> int | None:

@@ -29,7 +29,7 @@ def run(args: argparse.Namespace) -> int:
     index = level_index(tower, args.level)
     node = node_at(tower, index, args.label)
     diagram.check_digits(index)
-    if tower.multiplicity(index, node) is None:
+    if not tower.has_closed_form:
         diagram.check_size(index)
         DelayedProgress(f"building {tower.spec}").run(lambda bar: diagram.ensure(index, progress=bar))
     document = node_document(diagram, index, node, args.label)
