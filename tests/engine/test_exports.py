@@ -30,3 +30,14 @@ def test_tikz_has_every_node_and_edge():
     assert len(edges) == sum(len(d.children(i, n)) for i in range(3) for n in d.level(i))
     # (3,1) -> (3,1) through (3) and (2,1): two edges, labelled 2
     assert any(count == "2" for _, count, _ in edges)
+
+
+def test_format_from_the_file_name():
+    import pytest
+
+    from engine.errors import UserError
+    from engine.export import FORMATS, format_for_path
+
+    assert [format_for_path(f"x{ext}") for ext, _ in FORMATS.values()] == list(FORMATS)
+    with pytest.raises(UserError, match=r"\.tikz"):
+        format_for_path("figure.pdf")
