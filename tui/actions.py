@@ -46,6 +46,7 @@ MAIN: tuple[Act, ...] = (
     Act("pick_tower", ("t",), "tower", "open another tower: pick the family, fill in its keys", FILES, footer=True),
     Act("save_session", ("s", "ctrl+s"), "save", "save the session (tower, place, bookmarks, notes, view)", FILES, footer=True),
     Act("open_session", ("o",), "open", "open a saved session file", FILES),
+    Act("export_levels", ("e",), "export", "export levels 0..current as a TikZ picture, LaTeX table, DOT, CSV or JSON", FILES),
     Act("cancel_build", ("escape",), "stop", "stop the level being built", APP),
 )
 

@@ -160,6 +160,11 @@ class MainScreen(Screen[None]):
     def action_open_session(self) -> None:
         self.explorer.ask_open()
 
+    def action_export_levels(self) -> None:
+        from tui.exporting import ask_export
+
+        ask_export(self.explorer)
+
     def action_cancel_build(self) -> None:
         self.explorer.cancel_build()
 
