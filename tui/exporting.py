@@ -55,7 +55,6 @@ def ask_export(app: ExplorerApp) -> None:
         app.notify("this level is still being built; export when it is shown", severity="warning")
         return
     level = format_level(state.tower.level_of(upto))
-    kinds = ", ".join(f"{ext} {what}" for ext, what in FORMATS.values())
 
     def done(text: str | None) -> None:
         if text is None:
@@ -73,7 +72,7 @@ def ask_export(app: ExplorerApp) -> None:
         app.run_worker(work, thread=True, group="export", exit_on_error=False)
 
     app.push_screen(
-        Prompt(f"Export levels 0 to {level}", f"File name or path ({kinds}):", default_name(app),
+        Prompt(f"Export levels 0 to {level}", "File name or path; its extension picks the format\n(.tikz picture, .tex table, .dot, .csv, .json):", default_name(app),
                check=check_export_path),
         done,
     )
