@@ -4,7 +4,8 @@ Levels 0, 1/2, 1, 3/2, ...: level k holds the partitions λ of N with N − λ_1
 S_N-modules in V^{⊗k}); level k+1/2 holds the partitions μ of N−1 with (N−1) − μ_1 ≤ k
 (V^{⊗k} restricted to S_{N−1}).  k → k+1/2 removes a box (restriction), k+1/2 → k+1 adds one
 (induction), since V = Ind_{S_{N−1}}^{S_N} 1 (Jones, *The Potts model and the symmetric group*,
-1994; Halverson and Ram, *Partition algebras*, European J. Combin. 26, 2005, §3).
+1994; Martin, *Temperley–Lieb algebras for non-planar statistical mechanics — the partition
+algebra construction*, J. Knot Theory Ramifications 3, 1994).
 
 Dimensions: f^λ by the hook length formula.  Tensor dimension N^k at k and at k+1/2.  Generic
 dimension: the partition algebra P_k(N) has dimension Bell(2k), P_{k+1/2}(N) has Bell(2k+1)
@@ -111,7 +112,7 @@ class SymmetricTower(Tower):
         """Closed form, no path counting.
 
         V^{⊗k} ≅ ⊕_t S(k,t) · Ind_{S_{N−t}}^{S_N} 1 (orbits of S_N on [N]^k are set partitions of
-        [k] into t ≤ N blocks; Halverson and Ram 2005, §3), and Ind_{S_{N−t}}^{S_N} 1 contains S^λ
+        [k] into t ≤ N blocks; Jones 1994, Martin 1994), and Ind_{S_{N−t}}^{S_N} 1 contains S^λ
         f^{λ/(N−t)} times (Pieri rule; Macdonald I.5).  Hence m_λ(k) = Σ_t S(k,t)·f^{λ/(N−t)}; at
         k+1/2, restricting to S_{N−1}: m_μ(k+1/2) = Σ_t S(k+1,t+1)·f^{μ/(N−1−t)}.
         """

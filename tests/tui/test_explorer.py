@@ -42,8 +42,8 @@ async def test_stepping_through_symmetric_4_shows_the_engines_numbers() -> None:
         await pilot.press("j")  # (4) → (3,1)
         assert app.state.node == (3, 1)
         row = next(line for line in pane_text(current_pane(app)) if "(3,1)" in line)
-        # m_(3,1)(3) = Σ_t S(3,t)·f^{(3,1)/(4−t)} = 1·1 + 3·2 + 1·3 = 10 (Halverson and Ram,
-        # Partition algebras, 2005, §3; Stirling numbers from sympy); dim S^(3,1) = 3 (hook lengths)
+        # m_(3,1)(3) = Σ_t S(3,t)·f^{(3,1)/(4−t)} = 1·1 + 3·2 + 1·3 = 10 (the orbit
+        # decomposition of V⊗3, common practice; Stirling numbers from sympy); dim S^(3,1) = 3 (hook lengths)
         assert row.startswith("▶") and row.split()[-2:] == ["10", "3"]
         text = details_text(app)
         assert "10" in text and "dimension 3" in text
