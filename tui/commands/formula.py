@@ -1,0 +1,71 @@
+"""``towerscope formula symmetric:n=N --label X``: the multiplicity of a node as a closed form in k."""
+
+from __future__ import annotations
+
+import argparse
+import sys
+
+from tui.cli_support import print_json
+
+
+def add_commands(sub: argparse._SubParsersAction) -> None:
+    p = sub.add_parser(
+        "formula",
+        help="the multiplicity of an S_N node as a closed form in k (Stirling numbers and powers j^k)",
+        description="Print m_λ(k) = Σ_t f^{λ/(N−t)}·S(k,t) and the same as an exponential sum Σ_j b_j·j^k, "
+        "for a partition λ of N (integer levels k) or of N−1 (half levels k+1/2).",
+    )
+    p.add_argument("spec", help="a symmetric tower spec, e.g. symmetric:n=5")
+    p.add_argument("--label", required=True, metavar="X", help="a partition of N, or of N−1 for half levels")
+    p.add_argument("--check", type=int, default=8, metavar="K", help="also print the values at k = 0..K (default 8)")
+    p.add_argument("--json", action="store_true", help="one JSON object (coefficients as exact fractions)")
+    p.set_defaults(handler=run)
+
+
+def run(args: argparse.Namespace) -> int:
+    from engine.closed_forms import symmetric_closed_form
+    from engine.errors import UserError
+    from engine.partitions import PartitionError, parse_partition
+    from engine.specs import parse_spec
+
+    tower = parse_spec(args.spec)
+    if tower.family != "symmetric" or not hasattr(tower, "n"):
+        raise UserError(f"closed forms in k are known for symmetric:n=N towers, not {tower.spec}")
+    try:
+        node = parse_partition(args.label)
+    except PartitionError as exc:
+        raise UserError(str(exc)) from None
+    n, halves = tower.n, getattr(tower, "halves", False)
+    if sum(node) == n:
+        index = 0
+    elif sum(node) == n - 1 and halves:
+        index = 1
+    else:
+        wanted = f"a partition of {n}" + (f" (or of {n - 1} for half levels)" if halves else "")
+        raise UserError(f"{args.label!r} is not {wanted}")
+    if args.check < 0:
+        raise UserError(f"--check must be 0 or more, got {args.check}")
+    form = symmetric_closed_form(tower, index, node)
+    values = [form.value(k) for k in range(args.check + 1)]
+    if args.json:
+        print_json(
+            {
+                "tower": tower.spec,
+                "label": tower.format(node),
+                "levels": "half" if form.half else "integer",
+                "stirling": [{"t": t, "coefficient": c} for t, c in sorted(form.stirling.items())],
+                "powers": [
+                    {"base": j, "numerator": b.numerator, "denominator": b.denominator}
+                    for j, b in sorted(form.powers.items(), reverse=True)
+                ],
+                "values": values,
+            }
+        )
+        return 0
+    out = sys.stdout
+    out.write(f"{form.name()} on {tower.spec}, for every k ≥ 0 (S = Stirling numbers of the second kind):\n")
+    out.write(f"  = {form.stirling_text()}\n")
+    out.write(f"  = {form.powers_text()}" + ("   (0^k is 1 at k = 0, else 0)" if 0 in form.powers else "") + "\n")
+    where = "k+1/2" if form.half else "k"
+    out.write(f"  at {where} = " + ", ".join(f"{k}{'.5' if form.half else ''}: {v}" for k, v in enumerate(values)) + "\n")
+    return 0
