@@ -123,6 +123,10 @@ class Tower(ABC):
         form) works with at this level, or None when it has no closed form or they stay small."""
         return None
 
+    def formula(self, index: int, node: Node) -> str | None:
+        """The multiplicity of ``node`` as a closed form in k (one line), or None."""
+        return None
+
     def reachable(self, index: int, node: Node) -> bool | None:
         """Whether ``node`` has a path from the root, decided without counting, or None when the
         family cannot say (the diagram then counts)."""

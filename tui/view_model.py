@@ -119,6 +119,7 @@ def node_details(state: ExplorerState) -> NodeDetails | None:
         child_level=level_text(diagram, index + 1) if has_next else None,
         note=state.notes.get((index, node), ""),
         bookmarked=(index, node) in state.bookmarks,
+        formula=tower.formula(index, node),
     )
 
 

@@ -131,6 +131,13 @@ class SymmetricTower(Tower):
         multiplicity itself is at most N^k, the dimension of the tensor space."""
         return int((self._k(index) + 1) * log10(self.n)) + 1
 
+    def formula(self, index: int, node: Partition) -> str:
+        """m in k by the Stirling-number closed form (engine.closed_forms)."""
+        from engine.closed_forms import symmetric_closed_form
+
+        form = symmetric_closed_form(self, index, node)
+        return f"{form.name()} = {form.stirling_text()}"
+
     def level_size(self, index: int) -> int:
         """Number of nodes with a path on a level: partitions (top−j, ν) with ν ⊢ j, ν_1 ≤ top−j."""
         top = self.n - 1 if self._is_half(index) else self.n

@@ -211,3 +211,16 @@ async def test_details_toggle_and_narrow_terminal() -> None:
         await settle(pilot)
         assert not app.screen.query_one(DetailsPane).display
         assert len([p for p in app.screen.query(LevelPane) if p.display]) > 3
+
+
+async def test_details_show_the_closed_form_where_the_family_has_one() -> None:
+    # S_4, (4) at level 1: m = S(k,0) + S(k,1) + S(k,2) + S(k,3) + S(k,4) (orbit decomposition,
+    # f^{(4)/(4−t)} = 1 for every t); su2 towers have no formula in k
+    app = app_on("symmetric:n=4", search_faithful=False)
+    async with app.run_test(size=(120, 40)) as pilot:
+        await settle(pilot)
+        assert "m_(4)(k) = S(k,0) + S(k,1) + S(k,2) + S(k,3) + S(k,4)" in details_text(app).replace("\n", " ")
+    app = app_on("su2:kind=tetrahedral", search_faithful=False)
+    async with app.run_test(size=(120, 40)) as pilot:
+        await settle(pilot)
+        assert "in k" not in details_text(app)

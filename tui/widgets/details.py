@@ -26,6 +26,7 @@ class NodeDetails:
     child_level: str | None = None
     note: str = ""
     bookmarked: bool = False
+    formula: str | None = None
 
 
 def _neighbours(text: Text, title: str, level: str | None, items: list[tuple[str, int]], width: int) -> None:
@@ -62,6 +63,9 @@ def details_text(info: NodeDetails | None, width: int, height: int) -> Text:
     text.append("multiplicity\n", style="bold")
     for line in wrap_text(exact_int(info.multiplicity), width - 1):
         text.append(" " + line + "\n")
+    if info.formula:
+        text.append("in k ", style="bold")
+        text.append(info.formula + "\n")
     _neighbours(text, "parents", info.parent_level, info.parents, width)
     _neighbours(text, "children", info.child_level, info.children, width)
     drawing = draw_label(info.label, width, max(height // 2, 5))
