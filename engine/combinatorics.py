@@ -58,8 +58,3 @@ def double_factorial_odd(k: int) -> int:
 def catalan(n: int) -> int:
     """C(2n, n)/(n+1) (OEIS A000108)."""
     return comb(2 * n, n) // (n + 1)
-
-
-def factorial_exact(n: int) -> int:
-    """n! (OEIS A000142)."""
-    return factorial(n)

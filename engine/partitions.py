@@ -91,12 +91,6 @@ def remove_box(p: Partition, row: int) -> Partition:
     return p[:row] + (p[row] - 1,) + p[row + 1 :]
 
 
-def add_box(p: Partition, row: int) -> Partition:
-    if row == len(p):
-        return p + (1,)
-    return p[:row] + (p[row] + 1,) + p[row + 1 :]
-
-
 def smaller_by_one_box(p: Partition) -> list[Partition]:
     """Every partition obtained by removing one corner box, top row first."""
     last = len(p) - 1
