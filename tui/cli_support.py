@@ -27,6 +27,11 @@ def node_at(tower: Tower, index: int, label: str) -> Node:
     return tower.parse(label, index)
 
 
+def build_levels(diagram: Diagram, index: int) -> None:
+    """Build the diagram up to ``index`` (the size guard refuses first), with a delayed progress bar."""
+    DelayedProgress(f"building {diagram.tower.spec}").run(lambda bar: diagram.ensure(index, progress=bar))
+
+
 def print_json(document: Any) -> None:
     sys.stdout.write(json.dumps(document, ensure_ascii=False) + "\n")
 

@@ -5,7 +5,7 @@ from __future__ import annotations
 import argparse
 import sys
 
-from tui.cli_support import DelayedProgress, level_index, open_diagram
+from tui.cli_support import build_levels, level_index, open_diagram
 
 FORMATS = ("tikz", "latex", "dot", "csv", "json")  # engine.export.FORMATS, kept literal for a quick --help
 
@@ -32,8 +32,7 @@ def run(args: argparse.Namespace) -> int:
         fmt = format_for_path(args.output)
     diagram = open_diagram(args.spec)
     upto = level_index(diagram.tower, args.to)
-    diagram.check_size(upto)
-    DelayedProgress(f"building {diagram.tower.spec}").run(lambda bar: diagram.ensure(upto, progress=bar))
+    build_levels(diagram, upto)
     text = render(diagram, upto, fmt)
     if args.output == "-":
         sys.stdout.write(text)

@@ -5,7 +5,7 @@ from __future__ import annotations
 import argparse
 import sys
 
-from tui.cli_support import DelayedProgress, level_index, open_diagram, print_json
+from tui.cli_support import build_levels, level_index, open_diagram, print_json
 
 
 def add_commands(sub: argparse._SubParsersAction) -> None:
@@ -28,8 +28,7 @@ def add_commands(sub: argparse._SubParsersAction) -> None:
 def run(args: argparse.Namespace) -> int:
     diagram = open_diagram(args.spec)
     upto = level_index(diagram.tower, args.to)
-    diagram.check_size(upto)
-    DelayedProgress(f"building {diagram.tower.spec}").run(lambda bar: diagram.ensure(upto, progress=bar))
+    build_levels(diagram, upto)
     if args.json:
         from engine.export.documents import levels_document
 

@@ -4,7 +4,7 @@ from __future__ import annotations
 
 import argparse
 
-from tui.cli_support import DelayedProgress, level_index, node_at, open_diagram, print_json
+from tui.cli_support import build_levels, level_index, node_at, open_diagram, print_json
 
 
 def add_commands(sub: argparse._SubParsersAction) -> None:
@@ -30,8 +30,7 @@ def run(args: argparse.Namespace) -> int:
     node = node_at(tower, index, args.label)
     diagram.check_digits(index)
     if not tower.has_closed_form:
-        diagram.check_size(index)
-        DelayedProgress(f"building {tower.spec}").run(lambda bar: diagram.ensure(index, progress=bar))
+        build_levels(diagram, index)
     document = node_document(diagram, index, node, args.label)
     if args.json:
         print_json(document)

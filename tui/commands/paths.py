@@ -5,7 +5,7 @@ from __future__ import annotations
 import argparse
 import sys
 
-from tui.cli_support import DelayedProgress, level_index, node_at, open_diagram, print_json
+from tui.cli_support import build_levels, level_index, node_at, open_diagram, print_json
 
 _ORDER = (
     "Paths are ranked 0..total-1 by their last step first: the parent in the level's display order, "
@@ -57,8 +57,7 @@ def _prepare(args: argparse.Namespace):
     index = level_index(tower, args.level)
     node = node_at(tower, index, args.label)
     encoding = get_encoding(tower, args.encoding)
-    diagram.check_size(index)
-    DelayedProgress(f"building {tower.spec}").run(lambda bar: diagram.ensure(index, progress=bar))
+    build_levels(diagram, index)
     require_node(diagram, index, node, args.label)
     return PathIndex(diagram), index, node, encoding
 
