@@ -20,7 +20,6 @@ from typing import Sequence
 from engine.errors import SpecError
 from engine.partitions import (
     Partition,
-    PartitionError,
     format_partition,
     larger_by_one_box,
     parse_partition,
@@ -172,13 +171,7 @@ class OneBoxTower(Tower):
         else:
             where = f"of {index}"
         expected = f"a partition {where} with {self.admissible_text()}, e.g. {self._example(index)}"
-        try:
-            node = parse_partition(text)
-        except PartitionError as exc:
-            raise self.label_error(text, index, expected) from exc
-        if not self.on_level(index, node):
-            raise self.label_error(text, index, expected)
-        return node
+        return self.read_label(text, index, expected, parse_partition, lambda lam: self.on_level(index, lam))
 
     def _example(self, index: int) -> str:
         lam: Partition = (index,) if index else ()

@@ -20,12 +20,13 @@ from __future__ import annotations
 
 from abc import ABC, abstractmethod
 from fractions import Fraction
-from typing import Hashable, Iterable, Sequence
+from typing import Callable, Hashable, Iterable, Sequence, TypeVar
 
-from engine.errors import LabelError
+from engine.errors import LabelError, UserError
 
 Node = Hashable
 Edge = tuple[Node, int]
+T = TypeVar("T")
 
 
 class Tower(ABC):
@@ -161,3 +162,16 @@ class Tower(ABC):
             f"{text!r} is not a node of {self.spec} at level {format_level(self.level_of(index))} "
             f"(expected {expected})"
         )
+
+    def read_label(
+        self, text: str, index: int, expected: str, read: Callable[[str], T], fits: Callable[[T], bool]
+    ) -> T:
+        """``read(text)`` when it reads (no UserError) and ``fits`` the level; otherwise the
+        ``label_error`` that names what was ``expected``."""
+        try:
+            value = read(text)
+        except UserError as exc:
+            raise self.label_error(text, index, expected) from exc
+        if not fits(value):
+            raise self.label_error(text, index, expected)
+        return value

@@ -29,7 +29,6 @@ from engine.errors import SpecError
 from engine.families.symmetric import SymmetricTower
 from engine.partitions import (
     Partition,
-    PartitionError,
     conjugate,
     format_partition,
     larger_by_one_box,
@@ -137,12 +136,10 @@ class AlternatingTower(Tower):
         body = text.strip()
         sign = body[-1] if body[-1:] in ("+", "-") else ""
         expected = f"a partition of {top} (self-conjugate ones with + or -, e.g. (2,2)+)"
-        try:
-            lam = parse_partition(body[:-1] if sign else body)
-        except PartitionError as exc:
-            raise self.label_error(text, index, expected) from exc
-        if sum(lam) != top or bool(sign) != (lam == conjugate(lam)):
-            raise self.label_error(text, index, expected)
+        lam = self.read_label(
+            text, index, expected, lambda _: parse_partition(body[:-1] if sign else body),
+            lambda lam: sum(lam) == top and bool(sign) == (lam == conjugate(lam)),
+        )
         return (lam, sign) if sign else (canonical(lam), "")
 
     def sort_key(self, node: Node, index: int = 0) -> tuple:

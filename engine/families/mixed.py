@@ -25,7 +25,7 @@ from engine.classical_dimensions import mixed_dimension
 from engine.errors import SpecError
 from engine.partition_pairs import PartitionPair, format_pair, parse_pair
 from engine.partition_tower import ESTIMATE_CAP, CountTable, corner_bound, vector_dimension
-from engine.partitions import Partition, PartitionError, larger_by_one_box, smaller_by_one_box
+from engine.partitions import Partition, larger_by_one_box, smaller_by_one_box
 from engine.specs import Family
 from engine.tower import Edge, Tower
 
@@ -129,13 +129,7 @@ class MixedTower(Tower):
             f"a pair (α,β) with |α| = {r} − t, |β| = {s} − t for some t ≥ 0 and ℓ(α) + ℓ(β) ≤ {self.n}, "
             f"e.g. {format_pair(self._example(r, s))}"
         )
-        try:
-            node = parse_pair(text)
-        except PartitionError as exc:
-            raise self.label_error(text, index, expected) from exc
-        if not self.on_level(index, node):
-            raise self.label_error(text, index, expected)
-        return node
+        return self.read_label(text, index, expected, parse_pair, lambda pair: self.on_level(index, pair))
 
     def _example(self, r: int, s: int) -> PartitionPair:
         t = min(r, s)

@@ -21,7 +21,6 @@ from engine.combinatorics import bell, stirling2_row
 from engine.errors import SpecError
 from engine.partitions import (
     Partition,
-    PartitionError,
     format_partition,
     parse_partition,
     partition_count,
@@ -164,13 +163,7 @@ class SymmetricTower(Tower):
     def parse(self, text: str, index: int) -> Partition:
         top = self.n - 1 if self._is_half(index) else self.n
         expected = f"a partition of {top}, e.g. {format_partition((top - 1, 1) if top > 1 else (top,) if top else ())}"
-        try:
-            node = parse_partition(text)
-        except PartitionError as exc:
-            raise self.label_error(text, index, expected) from exc
-        if sum(node) != top:
-            raise self.label_error(text, index, expected)
-        return node
+        return self.read_label(text, index, expected, parse_partition, lambda lam: sum(lam) == top)
 
     def sort_key(self, node: Partition, index: int = 0) -> tuple[int, ...]:
         """Reverse lexicographic order: (4), (3,1), (2,2), (2,1,1), (1,1,1,1)."""
