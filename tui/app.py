@@ -70,14 +70,16 @@ class ExplorerApp(App[None]):
     def go(self, index: int, node: Node | None = None, toward: tuple[int, Node] | None = None) -> None:
         """Move to level ``index`` once it is built (node: preferred selection; toward: the place we
         came from, to select a neighbour of it)."""
-        diagram = self.state.diagram
-        count = self.main.pane_count()
-        first = vm.first_shown(diagram, index, count)
-        need = vm.last_needed(diagram, index, count)
+        first, need = self._wanted = self._pane_span(index)
         self._request += 1
-        self._wanted = (first, need)
         self._pending = index
-        self._build(self._request, diagram, index, node, toward, first, need)
+        self._build(self._request, self.state.diagram, index, node, toward, first, need)
+
+    def _pane_span(self, index: int) -> tuple[int, int]:
+        """(first level shown, deepest level needed) for the panes around level ``index``."""
+        count = self.main.pane_count()
+        diagram = self.state.diagram
+        return vm.first_shown(diagram, index, count), vm.last_needed(diagram, index, count)
 
     @work(thread=True, exclusive=True, group="build", exit_on_error=False)
     def _build(self, request: int, diagram: Diagram, index: int, node: Node | None,
@@ -180,10 +182,7 @@ class ExplorerApp(App[None]):
     # ----- moving ---------------------------------------------------------------------------------------
     def view_changed(self) -> None:
         """The screen was resized or the details pane toggled: rebuild what the panes need."""
-        count = self.main.pane_count()
-        diagram = self.state.diagram
-        wanted = (vm.first_shown(diagram, self.state.index, count), vm.last_needed(diagram, self.state.index, count))
-        if wanted != self._wanted and self._request:
+        if self._pane_span(self.state.index) != self._wanted and self._request:
             self.go(self.state.index, self.state.node)
         elif self.cursor is not None:
             self.main.redraw()
