@@ -7,26 +7,31 @@ import pytest
 from tui.cli import main
 
 
+def main_output(capsys, *args: str) -> tuple[int, str, str]:
+    """Run ``towerscope ARGS`` in-process; returns (exit status, stdout, stderr)."""
+    try:
+        status = main(list(args))
+    except SystemExit as exc:  # argparse's own errors
+        status = exc.code
+    out, err = capsys.readouterr()
+    return status, out, err
+
+
+def main_json(capsys, *args: str):
+    """``towerscope ARGS --json`` in-process: the document, after checking the exit status is 0."""
+    status, out, err = main_output(capsys, *args, "--json")
+    assert status == 0, err
+    return json.loads(out)
+
+
 @pytest.fixture
 def run_cli(capsys):
-    """Run ``towerscope ARGS`` in-process; returns (exit status, stdout, stderr)."""
-
-    def run(*args: str):
-        status = main(list(args))
-        out, err = capsys.readouterr()
-        return status, out, err
-
-    return run
+    return lambda *args: main_output(capsys, *args)
 
 
 @pytest.fixture
-def run_json(run_cli):
-    def run(*args: str):
-        status, out, err = run_cli(*args, "--json")
-        assert status == 0, err
-        return json.loads(out)
-
-    return run
+def run_json(capsys):
+    return lambda *args: main_json(capsys, *args)
 
 
 def run_process(*args: str) -> subprocess.CompletedProcess:

@@ -14,7 +14,6 @@ Bratteli diagram); dim V is read off the contract's table of families.
 
 from __future__ import annotations
 
-import json
 import re
 from fractions import Fraction
 from pathlib import Path
@@ -22,8 +21,8 @@ from pathlib import Path
 import pytest
 
 from engine.specs import families
-from tests.cli.conftest import run_process
-from tui.cli import main
+from tests.cli.conftest import main_json as run_json
+from tests.cli.conftest import main_output, run_process
 
 ROOT = Path(__file__).resolve().parents[2]
 
@@ -57,21 +56,6 @@ IDS = [spec.split(":")[0] + "-" + str(i) for i, (spec, *_rest) in enumerate(TOWE
 def _from_the_project_folder(monkeypatch):
     # the example specs name files relative to the project folder
     monkeypatch.chdir(ROOT)
-
-
-def run(*args: str, capsys) -> tuple[int, str, str]:
-    try:
-        status = main(list(args))
-    except SystemExit as exc:  # argparse's own errors
-        status = exc.code
-    out, err = capsys.readouterr()
-    return status, out, err
-
-
-def run_json(capsys, *args: str):
-    status, out, err = run(*args, "--json", capsys=capsys)
-    assert status == 0, err
-    return json.loads(out)
 
 
 def level_values(top: str, halves: bool) -> list[Fraction]:
@@ -223,7 +207,7 @@ def _attrs(text: str | None) -> dict[str, str]:
 def test_export_dot(documents, capsys, tmp_path, spec, top, halves, dim_v):
     levels = levels_doc(documents, capsys, spec, top)["levels"]
     target = tmp_path / "tower.dot"
-    status, _, err = run("export", spec, "--to", top, "--format", "dot", "-o", str(target), capsys=capsys)
+    status, _, err = main_output(capsys, "export", spec, "--to", top, "--format", "dot", "-o", str(target))
     assert status == 0, err
     lines = target.read_text(encoding="utf-8").splitlines()
     assert lines[0].startswith("digraph") and lines[-1] == "}"
@@ -357,18 +341,18 @@ def _one_line_exit_2(status, out, err):
 
 @pytest.mark.parametrize("argv", ERRORS, ids=lambda a: " ".join(a)[:60])
 def test_bad_input_is_one_line_and_exit_2(capsys, argv):
-    _one_line_exit_2(*run(*argv, capsys=capsys))
+    _one_line_exit_2(*main_output(capsys, *argv))
 
 
 @pytest.mark.parametrize("argv", FILE_ERRORS, ids=lambda a: " ".join(a)[:60])
 def test_bad_files_are_one_line_and_exit_2(capsys, bad_files, argv):
-    _one_line_exit_2(*run(*(a.format(d=bad_files) for a in argv), capsys=capsys))
+    _one_line_exit_2(*main_output(capsys, *(a.format(d=bad_files) for a in argv)))
 
 
 def test_refusals_name_their_estimate(capsys):
-    _, _, err = run("levels", "symmetric:n=80", "--to", "200", capsys=capsys)
+    _, _, err = main_output(capsys, "levels", "symmetric:n=80", "--to", "200")
     assert re.search(r"about \d\.\d\de\+\d+ edges", err)
-    _, _, err = run("node", "symmetric:n=12", "--level", "10000000000", "--label", "(6,3,3)", capsys=capsys)
+    _, _, err = main_output(capsys, "node", "symmetric:n=12", "--level", "10000000000", "--label", "(6,3,3)")
     assert re.search(r"about \d\.\d\de\+\d+ digits", err)
 
 
