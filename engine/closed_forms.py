@@ -17,11 +17,15 @@ from __future__ import annotations
 from dataclasses import dataclass
 from fractions import Fraction
 from math import factorial
+from typing import TYPE_CHECKING
 
 from engine.combinatorics import stirling2
 from engine.errors import UserError
 from engine.partitions import Partition, format_partition, skew_tableaux_count
 from engine.tower import Tower
+
+if TYPE_CHECKING:
+    from engine.families.symmetric import SymmetricTower
 
 
 @dataclass(frozen=True)
@@ -78,12 +82,21 @@ class SymmetricClosedForm:
         return f"m_{format_partition(self.node)}({'k+1/2' if self.half else 'k'})"
 
 
+def closed_form_tower(tower: Tower) -> SymmetricTower:
+    """``tower`` itself when it is a ``symmetric:n=N`` tower (the permutation module, where these
+    closed forms hold); a UserError for any other tower."""
+    from engine.families.symmetric import SymmetricTower
+
+    if not isinstance(tower, SymmetricTower):
+        raise UserError(f"closed forms in k are known for symmetric:n=N towers, not {tower.spec}")
+    return tower
+
+
 def symmetric_closed_form(tower: Tower, index: int, node: Partition) -> SymmetricClosedForm:
     """The closed form of ``node`` on the kind of level ``index`` has (integer or half)."""
-    if tower.family != "symmetric" or not hasattr(tower, "n"):
-        raise UserError(f"closed forms in k are known for symmetric:n=N towers, not {tower.spec}")
-    n: int = tower.n  # type: ignore[attr-defined]
-    half = bool(getattr(tower, "halves", False)) and index % 2 == 1
+    symmetric = closed_form_tower(tower)
+    n = symmetric.n
+    half = symmetric.halves and index % 2 == 1
     top = n - 1 if half else n
     stirling: dict[int, int] = {}
     for t in range(top + 1):

@@ -23,19 +23,14 @@ def add_commands(sub: argparse._SubParsersAction) -> None:
 
 
 def run(args: argparse.Namespace) -> int:
-    from engine.closed_forms import symmetric_closed_form
+    from engine.closed_forms import closed_form_tower, symmetric_closed_form
     from engine.errors import UserError
-    from engine.partitions import PartitionError, parse_partition
+    from engine.partitions import parse_partition
     from engine.specs import parse_spec
 
-    tower = parse_spec(args.spec)
-    if tower.family != "symmetric" or not hasattr(tower, "n"):
-        raise UserError(f"closed forms in k are known for symmetric:n=N towers, not {tower.spec}")
-    try:
-        node = parse_partition(args.label)
-    except PartitionError as exc:
-        raise UserError(str(exc)) from None
-    n, halves = tower.n, getattr(tower, "halves", False)
+    tower = closed_form_tower(parse_spec(args.spec))
+    node = parse_partition(args.label)
+    n, halves = tower.n, tower.halves
     if sum(node) == n:
         index = 0
     elif sum(node) == n - 1 and halves:
