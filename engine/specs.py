@@ -9,7 +9,7 @@ from __future__ import annotations
 
 import importlib
 import pkgutil
-from dataclasses import dataclass, field
+from dataclasses import dataclass
 from typing import Callable
 
 from engine.errors import SpecError, UserError
@@ -29,7 +29,6 @@ class Family:
     #: position in listings
     rank: int = 100
     example: str = ""
-    aliases: tuple[str, ...] = field(default_factory=tuple)
 
 
 _REGISTRY: dict[str, Family] | None = None
@@ -81,11 +80,6 @@ def parse_spec(spec: str) -> Tower:
     name, params = split_spec(spec)
     registry = families()
     family = registry.get(name)
-    if family is None:
-        for candidate in registry.values():
-            if name in candidate.aliases:
-                family = candidate
-                break
     if family is None:
         raise SpecError(f"unknown tower family {name!r} (known: {', '.join(registry)})")
     for key in params:
