@@ -20,7 +20,6 @@ class Act:
     group: str
     footer: bool = False
     palette: bool = True
-    priority: bool = False
 
 
 MOVE, FIND, MARK, FILES, APP = "Moving", "Finding", "Marking", "Towers and files", "The app"
@@ -74,7 +73,6 @@ def bindings(acts: tuple[Act, ...]) -> list[Binding]:
     for act in acts:
         for n, key in enumerate(act.keys):
             found.append(
-                Binding(key, act.action, act.label, show=act.footer and n == 0,
-                        key_display=key_text(key), priority=act.priority)
+                Binding(key, act.action, act.label, show=act.footer and n == 0, key_display=key_text(key))
             )
     return found
