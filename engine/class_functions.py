@@ -174,7 +174,7 @@ def mckay_matrix(table: CharacterTable, module: Sequence[Entry]) -> tuple[tuple[
     return tuple(rows)
 
 
-def restrict(group: CharacterTable, fusion: Sequence[int], f: Sequence[Entry]) -> tuple[Entry, ...]:
+def restrict(fusion: Sequence[int], f: Sequence[Entry]) -> tuple[Entry, ...]:
     """A class function of G read on the subgroup's classes (fusion[D] = the G-class holding D)."""
     return tuple(f[c] for c in fusion)
 
@@ -184,7 +184,7 @@ def restriction_matrix(group: CharacterTable, sub: CharacterTable, fusion: Seque
     """A_ij = multiplicity of ψ_j in Res χ_i (tensored with the subgroup module U when given)."""
     rows = []
     for i, chi in enumerate(group.values):
-        res = restrict(group, fusion, chi)
+        res = restrict(fusion, chi)
         what = f"the restriction of {group.names[i]!r}"
         if module is not None:
             res = tuple(a * b for a, b in zip(res, module))
