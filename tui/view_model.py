@@ -131,7 +131,6 @@ def sums_line(state: ExplorerState, unfaithful: tuple[int, int | None] | None) -
         return None
     sums = diagram.sums(index)
     tower = diagram.tower
-    known = sums.generic_dimension is not None
     found: str | None = None
     searched = ""
     if unfaithful is not None:
@@ -150,5 +149,4 @@ def sums_line(state: ExplorerState, unfaithful: tuple[int, int | None] | None) -
         algebra=tower.algebra_name(index),
         unfaithful_from=found,
         searched=searched,
-        known_generic=known,
     )

@@ -23,7 +23,6 @@ class SumsLine:
     #: None while the search runs or when the tower knows no generic dimension
     unfaithful_from: str | None
     searched: str = ""
-    known_generic: bool = True
 
 
 def sums_text(line: SumsLine, width: int) -> str:
@@ -38,7 +37,6 @@ def sums_text(line: SumsLine, width: int) -> str:
     if line.generic_dimension is not None:
         name = line.algebra or "algebra"
         parts.append(f"dim {name} {short_int(line.generic_dimension, w)}")
-    if line.known_generic:
         if line.unfaithful_from is None:
             parts.append("faithful? …")
         elif line.unfaithful_from:
