@@ -171,9 +171,8 @@ class Diagram:
         return kids, counts
 
     def _build_next(self, progress: Callable[[float], None] | None, cancel: CancelToken | None) -> None:
+        """Build the level after the deepest one (``ensure`` has checked that the tower has it)."""
         index = self.built
-        if self.tower.max_index is not None and index >= self.tower.max_index:
-            raise IndexError("past the last level")
         prev = self._levels[index]
         cache = self._children.setdefault(self.tower.step_key(index), {})
         compute = self._compute_step
