@@ -13,9 +13,12 @@ import csv
 import json
 import sys
 from pathlib import Path
-from typing import Any
+from typing import TYPE_CHECKING, Any
 
 from engine.errors import UserError
+
+if TYPE_CHECKING:
+    from engine.class_functions import CharacterTable
 
 
 def add_commands(subparsers: argparse._SubParsersAction) -> None:
@@ -103,26 +106,32 @@ def check_report(path: str) -> dict[str, Any]:
         tower = MatrixTower(f"graph:file={path}", "graph", pattern, root)
         return {"file": path, "kind": "tensor graph", "title": title, "root": root,
                 "half_levels": len(pattern) == 2, "steps": step_matrices(tower)}
-    from engine.class_functions import decompose
+    from engine.class_functions import decompose, mckay_matrix
     from engine.families.characters import character_tower
     from engine.files.character_table import read_character_file
 
     data = read_character_file(path)
     t = data.table
     tower = character_tower(f"characters:file={path}", "characters", t, data.module, subgroup=data.subgroup)
+    module = decompose(t, data.module, "V")
     report: dict[str, Any] = {
         "file": path, "kind": "character table", "group": t.name, "order": t.order,
-        "classes": len(t.classes), "irreducibles": [{"name": n, "dimension": d} for n, d in zip(t.names, t.degrees())],
-        "module_dimension": int(sum(m * d for m, d in zip(decompose(t, data.module, "V"), t.degrees()))),
-        "module": {n: m for n, m in zip(t.names, decompose(t, data.module, "V")) if m},
-        "mckay": step_matrices(character_tower("", "characters", t, data.module))[0]["matrix"],
+        "classes": len(t.classes), "irreducibles": _irreducibles(t),
+        "module_dimension": int(sum(m * d for m, d in zip(module, t.degrees()))),
+        "module": {n: m for n, m in zip(t.names, module) if m},
+        "mckay": [list(row) for row in mckay_matrix(t, data.module)],  # the whole step ⊗ V
         "steps": step_matrices(tower),
     }
     if data.subgroup is not None:
         s = data.subgroup.table
         report["subgroup"] = {"group": s.name, "order": s.order, "index": t.order // s.order,
-                              "irreducibles": [{"name": n, "dimension": d} for n, d in zip(s.names, s.degrees())]}
+                              "irreducibles": _irreducibles(s)}
     return report
+
+
+def _irreducibles(table: CharacterTable) -> list[dict[str, Any]]:
+    """Name and dimension of each irreducible character of a table."""
+    return [{"name": n, "dimension": d} for n, d in zip(table.names, table.degrees())]
 
 
 def run_check(args: argparse.Namespace) -> int:
