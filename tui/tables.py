@@ -79,8 +79,8 @@ def print_node(spec: str, kind: str, doc: dict[str, Any]) -> None:
     out.print(f"{spec}, level {_level_text(doc['level'])}" + (f" ({kind})" if kind else "") + f": node {doc['label']}")
     out.print(f"  multiplicity (paths from the root): {doc['multiplicity']}")
     out.print(f"  dimension of the irreducible module: {doc['dimension']}")
-    for key, word in (("parents", "parents"), ("children", "children")):
-        entries: Sequence[dict[str, Any]] = doc[key]
+    for word in ("parents", "children"):
+        entries: Sequence[dict[str, Any]] = doc[word]
         if not entries:
             out.print(f"  {word}: none")
             continue
