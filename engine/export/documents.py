@@ -11,16 +11,20 @@ from engine.levels import format_level, level_to_json
 from engine.tower import Node
 
 
-def level_entry(diagram: Diagram, index: int, cancel: CancelToken | None = None) -> dict[str, Any]:
+def node_values(diagram: Diagram, index: int, cancel: CancelToken | None = None) -> Iterator[tuple[str, int, int]]:
+    """(label, multiplicity, dimension) of every node of a level, in display order."""
     tower = diagram.tower
     level = diagram.level(index, cancel=cancel)
+    for node in diagram.nodes(index):
+        yield tower.format(node), level[node], tower.dimension(index, node)
+
+
+def level_entry(diagram: Diagram, index: int, cancel: CancelToken | None = None) -> dict[str, Any]:
+    nodes = [{"label": label, "multiplicity": m, "dimension": dim} for label, m, dim in node_values(diagram, index, cancel)]
     sums = diagram.sums(index, cancel=cancel)
     return {
-        "level": level_to_json(tower.level_of(index)),
-        "nodes": [
-            {"label": tower.format(node), "multiplicity": level[node], "dimension": tower.dimension(index, node)}
-            for node in diagram.nodes(index)
-        ],
+        "level": level_to_json(diagram.tower.level_of(index)),
+        "nodes": nodes,
         "sums": {"multiplicities": sums.multiplicities, "squares": sums.squares, "weighted": sums.weighted},
     }
 
@@ -35,12 +39,10 @@ def levels_document(
 
 def level_rows(diagram: Diagram, upto: int) -> Iterator[tuple[str, str, int, int]]:
     """(level, label, multiplicity, dimension) for every node of levels 0..upto."""
-    tower = diagram.tower
     for index in range(upto + 1):
-        level = diagram.level(index)
-        shown = format_level(tower.level_of(index))
-        for node in diagram.nodes(index):
-            yield shown, tower.format(node), level[node], tower.dimension(index, node)
+        shown = format_level(diagram.tower.level_of(index))
+        for label, m, dim in node_values(diagram, index):
+            yield shown, label, m, dim
 
 
 def require_node(diagram: Diagram, index: int, node: Node, text: str) -> int:
