@@ -26,7 +26,7 @@ start = time.perf_counter()
 sums = diagram.sums(upto)
 summed = time.perf_counter() - start
 print(json.dumps({"nodes": len(diagram.level(upto)), "build": built, "sums": summed,
-                  "estimate": diagram.estimate(upto), "consistent": sums.consistent}))
+                  "estimate": diagram.tower.estimate_edges(upto), "consistent": sums.consistent}))
 """
 
 CASES = [

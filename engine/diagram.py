@@ -91,10 +91,6 @@ class Diagram:
         """Index of the deepest level built so far."""
         return len(self._levels) - 1
 
-    def estimate(self, index: int) -> int | None:
-        """The tower's estimate of the edges walked to build levels 0..index."""
-        return self.tower.estimate_edges(index)
-
     def check_size(self, index: int) -> None:
         """Raise TooLarge when building up to ``index`` is estimated to exceed the edge limit."""
         if index <= self.built:
