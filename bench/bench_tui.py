@@ -24,8 +24,8 @@ import time
 start = time.perf_counter()
 import asyncio, sys
 sys.set_int_max_str_digits(0)
-from tui.app import ExplorerApp
-from tui.session_files import demo_session_path, read_session
+from tui.explorer.app import ExplorerApp
+from tui.explorer.session_files import demo_session_path, read_session
 
 async def main():
     app = ExplorerApp(read_session(demo_session_path()), demo=True, search_faithful=False)
@@ -73,9 +73,9 @@ async def key_to_repaint(spec: str, level: int, presses: int) -> dict[str, list[
 
     from textual.worker import WorkerCancelled
 
-    from tui.app import ExplorerApp
-    from tui.state import state_for_spec
-    from tui.widgets.level_pane import LevelPane
+    from tui.explorer.app import ExplorerApp
+    from tui.explorer.state import state_for_spec
+    from tui.explorer.widgets.level_pane import LevelPane
 
     sys.set_int_max_str_digits(0)
     state = state_for_spec(spec)

@@ -17,15 +17,10 @@ from __future__ import annotations
 from dataclasses import dataclass
 from fractions import Fraction
 from math import factorial
-from typing import TYPE_CHECKING
+from functools import lru_cache
 
-from engine.combinatorics import stirling2
-from engine.errors import UserError
+from engine.combinatorics import stirling2_row
 from engine.partitions import Partition, format_partition, skew_tableaux_count
-from engine.tower import Tower
-
-if TYPE_CHECKING:
-    from engine.families.symmetric import SymmetricTower
 
 
 @dataclass(frozen=True)
@@ -42,9 +37,11 @@ class SymmetricClosedForm:
 
     def value(self, k: int) -> int:
         """m at level k (or k+1/2), from the Stirling form."""
-        if self.half:
-            return sum(c * stirling2(k + 1, t + 1) for t, c in self.stirling.items())
-        return sum(c * stirling2(k, t) for t, c in self.stirling.items())
+        if not self.stirling:
+            return 0
+        shift = 1 if self.half else 0
+        row = stirling2_row(k + shift, max(self.stirling) + shift)
+        return sum(c * row[t + shift] for t, c in self.stirling.items())
 
     def value_from_powers(self, k: int) -> int:
         """m at level k (or k+1/2), from the exponential sum."""
@@ -82,21 +79,11 @@ class SymmetricClosedForm:
         return f"m_{format_partition(self.node)}({'k+1/2' if self.half else 'k'})"
 
 
-def closed_form_tower(tower: Tower) -> SymmetricTower:
-    """``tower`` itself when it is a ``symmetric:n=N`` tower (the permutation module, where these
-    closed forms hold); a UserError for any other tower."""
-    from engine.families.symmetric import SymmetricTower
-
-    if not isinstance(tower, SymmetricTower):
-        raise UserError(f"closed forms in k are known for symmetric:n=N towers, not {tower.spec}")
-    return tower
-
-
-def symmetric_closed_form(tower: Tower, index: int, node: Partition) -> SymmetricClosedForm:
-    """The closed form of ``node`` on the kind of level ``index`` has (integer or half)."""
-    symmetric = closed_form_tower(tower)
-    n = symmetric.n
-    half = symmetric.halves and index % 2 == 1
+@lru_cache(maxsize=4096)
+def symmetric_closed_form(n: int, node: Partition, half: bool) -> SymmetricClosedForm:
+    """The closed form of ``node`` in the S_n tower: λ ⊢ n at integer levels, μ ⊢ n−1 at half levels
+    (``half``).  The one place the S_N closed form is written; the family, its ``formula`` and the
+    set-partition tableaux all read it."""
     top = n - 1 if half else n
     stirling: dict[int, int] = {}
     for t in range(top + 1):

@@ -15,8 +15,9 @@ from __future__ import annotations
 
 import threading
 from dataclasses import dataclass
-from typing import Callable, Hashable, Protocol
+from typing import Callable, Hashable, Iterator, Protocol
 
+from engine.capabilities import AlgebraLevel, ClosedForm, DiagramAlgebra, LevelJump, SizeGuard
 from engine.errors import Cancelled, TooLarge
 from engine.tower import Edge, Node, Tower
 
@@ -84,6 +85,34 @@ class Diagram:
         self._reverse: dict[int, dict[Node, list[Edge]]] = {}
         self._lock = threading.RLock()
         self._id_lock = threading.Lock()
+        self._guard = tower.capability(SizeGuard)
+        self._closed_form = tower.capability(ClosedForm)
+        self._jump = tower.capability(LevelJump)
+        self._algebra = tower.capability(DiagramAlgebra)
+        #: whole levels reached by a jump (closed form or matrix powers), not built: index → level
+        self._jumped: dict[int, dict[Node, int]] = {}
+
+    @property
+    def can_jump(self) -> bool:
+        """Whether deep levels can be had without building the levels below them."""
+        return self._jump is not None
+
+    @property
+    def has_closed_form(self) -> bool:
+        """Whether single nodes can be had at deep levels without building the levels below."""
+        return self._closed_form is not None or self._jump is not None
+
+    def generic_dimension(self, index: int) -> int | None:
+        """The dimension of the level's diagram algebra, or None when the family knows none."""
+        return None if self._algebra is None else self._algebra.dimension(index)
+
+    def algebra(self, index: int) -> AlgebraLevel | None:
+        """The level's diagram algebra (name, parameter, dimension), or None."""
+        return None if self._algebra is None else self._algebra.at(index)
+
+    def formula(self, index: int, node: Node) -> str | None:
+        """The multiplicity of ``node`` as a formula in k, where the family has a closed form."""
+        return None if self._closed_form is None else self._closed_form.formula(index, node)
 
     # ----- building -------------------------------------------------------------------------
     @property
@@ -95,7 +124,7 @@ class Diagram:
         """Raise TooLarge when building up to ``index`` is estimated to exceed the edge limit."""
         if index <= self.built:
             return
-        estimate = self.tower.estimate_edges(index)
+        estimate = None if self._guard is None else self._guard.edges(index)
         if estimate is not None and estimate > self.edge_limit:
             from engine.levels import format_level
 
@@ -107,11 +136,16 @@ class Diagram:
             )
 
     def check_digits(self, index: int) -> None:
-        """Raise TooLarge when the tower's closed form at ``index`` would work with numbers of more
-        than ``digit_limit`` digits (and the level is not built, so it would be used)."""
+        """Raise TooLarge when the tower's closed form (or jump) at ``index`` would work with numbers
+        of more than ``digit_limit`` digits (and the level is not built, so it would be used)."""
         if index <= self.built:
             return
-        digits = self.tower.estimate_digits(index)
+        if self._closed_form is not None:
+            digits: int | None = self._closed_form.digits(index)
+        elif self._jump is not None:
+            digits = self._jump.digits(index)
+        else:
+            digits = None
         if digits is not None and digits > self.digit_limit:
             from engine.levels import format_level
 
@@ -225,21 +259,87 @@ class Diagram:
         key = (index, node)
         if key in self._closed:
             return self._closed[key]
+        jumped = self._jumped.get(index)
+        if jumped is not None:
+            return jumped.get(node, 0)
         self.check_digits(index)
-        closed = self.tower.multiplicity(index, node)
-        if closed is not None:
+        if self._closed_form is not None:
+            closed = self._closed_form.multiplicity(index, node)
             if len(self._closed) > 256:
                 self._closed.clear()
             self._closed[key] = closed
             return closed
+        if self._jump is not None:
+            return self.level_at(index).get(node, 0)
         return self.level(index).get(node, 0)
+
+    def level_at(self, index: int, progress: Progress | None = None, cancel: CancelToken | None = None) -> dict[Node, int]:
+        """node → multiplicity on level ``index``: the built level, or, where the family can jump
+        and the level is not built, the level by the jump (nothing below it is built)."""
+        self.tower.check_index(index)
+        if index <= self.built or self._jump is None:
+            return self.level(index, progress, cancel)
+        found = self._jumped.get(index)
+        if found is None:
+            self.check_digits(index)
+            found = self._jump.level(index)
+            if len(self._jumped) > 8:
+                self._jumped.clear()
+            self._jumped[index] = found
+        return found
+
+    def levels_between(
+        self, start: int, upto: int, progress: Progress | None = None, cancel: CancelToken | None = None
+    ) -> Iterator[tuple[int, dict[Node, int]]]:
+        """(index, level) for start..upto.  Where the family can jump and ``start`` is past the built
+        levels, level ``start`` comes by the jump and the rest by stepping from it (nothing below
+        ``start`` is built or kept); otherwise the levels are built as usual."""
+        self.tower.check_index(upto)
+        if start > upto:
+            return
+        if start <= self.built or self._jump is None:
+            self.ensure(upto, progress, cancel)
+            for index in range(start, upto + 1):
+                yield index, self.level(index)
+            return
+        self.check_digits(upto)
+        level = self.level_at(start)
+        yield start, level
+        children = self.tower.children
+        for index in range(start, upto):
+            if cancel is not None and cancel.is_set():
+                raise Cancelled()
+            new: dict[Node, int] = {}
+            for node, m in level.items():
+                for child, e in children(index, node):
+                    new[child] = new.get(child, 0) + m * e
+            level = new
+            if progress is not None:
+                progress(index + 1 - start, upto - start)
+            yield index + 1, level
+
+    def sums_of(self, index: int, level: dict[Node, int]) -> LevelSums:
+        """The sums of a level given as a mapping (built, jumped or swept by ``levels_between``)."""
+        if index <= self.built:
+            return self.sums(index)
+        return self._sums_of(index, level, None)
+
+    def nodes_at(self, index: int) -> list[Node]:
+        """The nodes of ``level_at(index)`` in the tower's display order."""
+        if index <= self.built or self._jump is None:
+            return self.nodes(index)
+        return self.tower.sort_nodes(self.level_at(index), index)
+
+    def sums_at(self, index: int, progress: Progress | None = None, cancel: CancelToken | None = None) -> LevelSums:
+        """``sums`` of ``level_at(index)``: no level below is built where the family can jump."""
+        if index <= self.built or self._jump is None:
+            return self.sums(index, progress, cancel)
+        return self._sums_of(index, self.level_at(index), cancel)
 
     def reachable(self, index: int, node: Node) -> bool:
         """Whether ``node`` has a path from the root (by the family's rule where it has one)."""
-        if index > self.built:
-            answer = self.tower.reachable(index, node)
-            if answer is not None:
-                return answer
+        if index > self.built and self._closed_form is not None:
+            return self._closed_form.reachable(index, node)
         return self.multiplicity(index, node) > 0
 
     def children(self, index: int, node: Node) -> list[Edge]:
@@ -277,7 +377,11 @@ class Diagram:
         found = self._sums.get(index)
         if found is not None:
             return found
-        level = self.level(index, progress, cancel)
+        found = self._sums_of(index, self.level(index, progress, cancel), cancel)
+        self._sums[index] = found
+        return found
+
+    def _sums_of(self, index: int, level: dict[Node, int], cancel: CancelToken | None) -> LevelSums:
         total = squares = weighted = 0
         dim = self.tower.dimension
         for count, (node, m) in enumerate(level.items(), 1):
@@ -286,10 +390,17 @@ class Diagram:
             weighted += m * dim(index, node)
             if count % _CHECK_EVERY == 0 and cancel is not None and cancel.is_set():
                 raise Cancelled()
-        found = LevelSums(
-            total, squares, weighted, self.tower.tensor_dimension(index), self.tower.generic_dimension(index)
-        )
-        self._sums[index] = found
+        return LevelSums(total, squares, weighted, self.tower.tensor_dimension(index), self.generic_dimension(index))
+
+    def first_unfaithful_of_tower(self) -> int | None:
+        """The first level index, anywhere in the tower, where the diagram algebra stops acting
+        faithfully (None: it never does, or the family knows no algebra): the family's theorem,
+        held against the level sums where those levels are built."""
+        if self._algebra is None:
+            return None
+        found = self._algebra.first_unfaithful
+        if found is not None and found <= self.built:
+            assert self.first_unfaithful(found) == found, "the family's faithfulness theorem disagrees with Σm²"
         return found
 
     def first_unfaithful(self, upto: int, cancel: CancelToken | None = None) -> int | None:
@@ -300,7 +411,7 @@ class Diagram:
         (the towers are inclusions; Goodman, de la Harpe, Jones 1989, ch. 2), so an element acting as
         zero at level k still does at k+1.  Hence a binary search: O(log upto) levels' sums.
         """
-        if self.tower.generic_dimension(0) is None:
+        if self._algebra is None:
             return None
         if self.sums(upto, cancel=cancel).faithful:
             return None

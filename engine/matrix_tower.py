@@ -18,6 +18,7 @@ from __future__ import annotations
 from dataclasses import dataclass
 from typing import Hashable, Sequence
 
+from engine.capabilities import Capability, Encodings, FiniteSteps, LevelJump, SizeGuard, StepMatrix
 from engine.errors import UserError
 from engine.tower import Edge, Tower
 
@@ -141,6 +142,29 @@ class MatrixTower(Tower):
     def estimate_edges(self, upto: int) -> int:
         per_step = max(sum(len(v) for v in edges.values()) for edges in self._edges)
         return per_step * (upto + 1)
+
+    #: path encodings (a walk on the graph: the sequence of node names)
+    encodings: tuple[str, ...] = ("walk",)
+
+    def capabilities(self) -> list[Capability]:
+        steps = FiniteSteps.of([self._step_matrix(s) for s in self.pattern],
+                               self.pattern[0].source.labels.index(self._labels[self._root]))
+        from engine.jumps import jump_digits, jump_level
+
+        return [
+            SizeGuard(self.estimate_edges),
+            steps,
+            LevelJump(lambda index: jump_level(steps, index), lambda index: jump_digits(steps, index)),
+            Encodings(self.encodings),
+        ]
+
+    def _step_matrix(self, step: Step) -> StepMatrix:
+        src, dst = step.source, step.target
+        return StepMatrix(
+            step.name, src.name, dst.name,
+            tuple(src.node(i) for i in range(len(src.labels))), tuple(dst.node(j) for j in range(len(dst.labels))),
+            src.labels, dst.labels, src.dimensions, dst.dimensions, step.matrix, step.constant(),
+        )
 
     def format(self, node: Hashable) -> str:
         return self._labels[node]

@@ -26,6 +26,7 @@ from engine.partitions import (
     smaller_by_one_box,
 )
 from engine.specs import int_param
+from engine.capabilities import AlgebraLevel, Capability, DiagramAlgebra, Encodings, SizeGuard
 from engine.tower import Edge, Tower
 
 #: the largest N accepted for dim V
@@ -134,6 +135,30 @@ class OneBoxTower(Tower):
         if not self.removes:
             return size == index
         return size <= index and (index - size) % 2 == 0
+
+    # ----- capabilities ---------------------------------------------------------------------
+    #: path encodings of the family, its default first
+    encodings: tuple[str, ...] = ("updown", "labels")
+
+    def capabilities(self) -> list[Capability]:
+        found: list[Capability] = [SizeGuard(self.estimate_edges), Encodings(self.encodings)]
+        if type(self).algebra_level is not OneBoxTower.algebra_level:
+            found.append(DiagramAlgebra(self.algebra_level, self.first_unfaithful()))
+        return found
+
+    def algebra_level(self, index: int) -> AlgebraLevel:
+        """The diagram algebra at a level (families with one override this)."""
+        raise NotImplementedError
+
+    def first_unfaithful(self) -> int | None:
+        """The first level index where the algebra stops acting faithfully (families override)."""
+        raise NotImplementedError
+
+    def generic_dimension(self, index: int) -> int:
+        return self.algebra_level(index).dimension
+
+    def algebra_name(self, index: int) -> str:
+        return self.algebra_level(index).name
 
     # ----- size -----------------------------------------------------------------------------
     def estimate_edges(self, upto: int) -> int:

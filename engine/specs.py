@@ -29,6 +29,11 @@ class Family:
     #: position in listings
     rank: int = 100
     example: str = ""
+    #: more specs worth trying (other keys, multiple edges, files): the generic tests run them all
+    examples: tuple[str, ...] = ()
+    #: the capabilities its towers declare (``engine.capabilities``; some only for some keys),
+    #: for listings and for the one-line "has none" messages
+    capabilities: tuple[type, ...] = ()
 
 
 _REGISTRY: dict[str, Family] | None = None
@@ -49,6 +54,11 @@ def families() -> dict[str, Family]:
         found.sort(key=lambda f: (f.rank, f.name))
         _REGISTRY = {f.name: f for f in found}
     return _REGISTRY
+
+
+def families_with(kind: type) -> list[str]:
+    """Names of the families whose towers may declare a capability of that kind."""
+    return [f.name for f in families().values() if any(issubclass(c, kind) for c in f.capabilities)]
 
 
 def split_spec(spec: str) -> tuple[str, dict[str, str]]:

@@ -22,6 +22,7 @@ from abc import ABC, abstractmethod
 from fractions import Fraction
 from typing import Callable, Hashable, Iterable, Sequence, TypeVar
 
+from engine.capabilities import C, Capability
 from engine.errors import LabelError, UserError
 
 Node = Hashable
@@ -101,40 +102,19 @@ class Tower(ABC):
     def tensor_dimension(self, index: int) -> int:
         """Dimension of the tensor space at this level ((dim V)^k)."""
 
-    def generic_dimension(self, index: int) -> int | None:
-        """Dimension of the diagram algebra that maps onto the centralizer, or None."""
-        return None
+    # ----- capabilities ---------------------------------------------------------------------
+    def capabilities(self) -> Sequence[Capability]:
+        """What the family knows beyond the graph (``engine.capabilities``); none by default."""
+        return ()
 
-    def algebra_name(self, index: int) -> str | None:
-        """Name of that diagram algebra at this level, e.g. ``P_3(4)``."""
-        return None
-
-    @property
-    def has_closed_form(self) -> bool:
-        """True when the family overrides ``multiplicity`` with a closed form."""
-        return type(self).multiplicity is not Tower.multiplicity
-
-    def multiplicity(self, index: int, node: Node) -> int | None:
-        """A closed form for the number of paths to ``node``, or None when the family has none.
-        Must return 0 for nodes without a path."""
-        return None
-
-    def estimate_digits(self, index: int) -> int | None:
-        """An upper estimate of the decimal digits of the numbers that ``multiplicity`` (the closed
-        form) works with at this level, or None when it has no closed form or they stay small."""
-        return None
-
-    def formula(self, index: int, node: Node) -> str | None:
-        """The multiplicity of ``node`` as a closed form in k (one line), or None."""
-        return None
-
-    def reachable(self, index: int, node: Node) -> bool | None:
-        """Whether ``node`` has a path from the root, decided without counting, or None when the
-        family cannot say (the diagram then counts)."""
-        return None
-
-    def estimate_edges(self, upto: int) -> int | None:
-        """An upper estimate of the edges walked to build levels 0..upto, or None if small."""
+    def capability(self, kind: type[C]) -> C | None:
+        """The capability of that kind the family declares, or None."""
+        cache = self.__dict__.get("_capabilities")
+        if cache is None:
+            cache = self.__dict__["_capabilities"] = tuple(self.capabilities())
+        for found in cache:
+            if isinstance(found, kind):
+                return found
         return None
 
     # ----- labels ---------------------------------------------------------------------------

@@ -26,6 +26,6 @@ def test_engine_never_imports_textual_or_rich():
 
 
 def test_cli_start_up_is_light():
-    loaded = _modules_after("from tui.cli import build_parser\nbuild_parser()\nfrom engine.specs import families\nfamilies()")
+    loaded = _modules_after("from tui.cli.main import build_parser\nbuild_parser()\nfrom engine.specs import families\nfamilies()")
     heavy = {m.split(".")[0] for m in loaded} & {"textual", "sympy", "networkx", "rich"}
     assert not heavy

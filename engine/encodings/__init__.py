@@ -1,4 +1,4 @@
-"""Encodings of paths, looked up by the tower's family name.
+"""Encodings of paths: each family declares the ones it offers (the ``Encodings`` capability).
 
 | family | encodings (the first is the default) |
 |---|---|
@@ -14,6 +14,7 @@
 
 from __future__ import annotations
 
+from engine.capabilities import Encodings
 from engine.encodings.base import Encoding
 from engine.encodings.labels import LabelSequence
 from engine.encodings.tableaux import StandardTableau, UpDownTableau
@@ -32,22 +33,11 @@ _ALL: dict[str, Encoding] = {
     )
 }
 
-FAMILY_ENCODINGS: dict[str, tuple[str, ...]] = {
-    "symmetric": ("vacillating", "updown"),
-    "general-linear": ("tableau", "updown", "labels"),
-    "orthogonal": ("updown", "labels"),
-    "symplectic": ("updown", "labels"),
-    "mixed": ("pairs",),
-    "su2": ("walk",),
-    "graph": ("walk",),
-    "characters": ("walk",),
-}
-
-
 def encodings_for(tower: Tower) -> list[Encoding]:
-    """The encodings of a tower's paths, its default first."""
-    names = FAMILY_ENCODINGS.get(tower.family, ("labels",))
-    return [_ALL[n] for n in names if _ALL[n].supports(tower)]
+    """The encodings of a tower's paths, its default first (``labels`` when it declares none)."""
+    declared = tower.capability(Encodings)
+    names = declared.names if declared is not None else ("labels",)
+    return [_ALL[n] for n in names]
 
 
 def default_encoding(tower: Tower) -> Encoding:
@@ -67,7 +57,7 @@ def get_encoding(tower: Tower, name: str | None) -> Encoding:
     if name == "labels":
         return _ALL["labels"]
     accepted = ", ".join(dict.fromkeys([e.name for e in offered] + ["labels"]))
-    raise UserError(f"{tower.family} towers have no encoding {name!r} (accepted: {accepted})")
+    raise UserError(f"{tower.spec} has no path encoding {name!r} (accepted: {accepted})")
 
 
-__all__ = ["Encoding", "FAMILY_ENCODINGS", "default_encoding", "encodings_for", "get_encoding"]
+__all__ = ["Encoding", "default_encoding", "encodings_for", "get_encoding"]

@@ -24,10 +24,6 @@ class Encoding(ABC):
     #: how the text form is written, for help texts
     syntax: str = ""
 
-    def supports(self, tower: Tower) -> bool:
-        """Whether this encoding is a bijection on the paths of ``tower``."""
-        return True
-
     @abstractmethod
     def encode(self, tower: Tower, path: Path) -> Any:
         """The object that stands for ``path``."""

@@ -141,10 +141,6 @@ class UpDownTableau(Encoding):
     title = "up–down tableau"
     syntax = "one step per level, '+r' adds a box in row r, '-r' removes one, e.g. '+1 +1 -1 +2'; empty '∅'"
 
-    def supports(self, tower: Tower) -> bool:
-        # symmetric towers without half levels join nodes by several edges (one per box removed)
-        return not (tower.family == "symmetric" and tower.steps_per_unit != 2)
-
     def encode(self, tower: Tower, path: Path) -> tuple[int, ...]:
         _single_edges(path, self.name)
         return tuple(box_step(a, b) for a, b in zip(path.nodes, path.nodes[1:]))

@@ -9,10 +9,10 @@ from engine.diagram import Diagram
 from engine.export.documents import level_rows
 
 
-def to_csv(diagram: Diagram, upto: int) -> str:
+def to_csv(diagram: Diagram, upto: int, start: int = 0) -> str:
     out = io.StringIO()
     writer = csv.writer(out, lineterminator="\n")
     writer.writerow(["level", "label", "multiplicity", "dimension"])
-    for row in level_rows(diagram, upto):
+    for row in level_rows(diagram, upto, start):
         writer.writerow(row)
     return out.getvalue()

@@ -11,37 +11,60 @@ from engine.levels import format_level, level_to_json
 from engine.tower import Node
 
 
-def node_values(diagram: Diagram, index: int, cancel: CancelToken | None = None) -> Iterator[tuple[str, int, int]]:
+def node_values(diagram: Diagram, index: int, level: dict[Node, int]) -> Iterator[tuple[str, int, int]]:
     """(label, multiplicity, dimension) of every node of a level, in display order."""
     tower = diagram.tower
-    level = diagram.level(index, cancel=cancel)
-    for node in diagram.nodes(index):
+    for node in tower.sort_nodes(level, index) if index > diagram.built else diagram.nodes(index):
         yield tower.format(node), level[node], tower.dimension(index, node)
 
 
-def level_entry(diagram: Diagram, index: int, cancel: CancelToken | None = None) -> dict[str, Any]:
-    nodes = [{"label": label, "multiplicity": m, "dimension": dim} for label, m, dim in node_values(diagram, index, cancel)]
-    sums = diagram.sums(index, cancel=cancel)
-    return {
+def level_entry(diagram: Diagram, index: int, level: dict[Node, int]) -> dict[str, Any]:
+    """One level of ``levels --json``: its nodes, sums and (where the family knows it) its algebra."""
+    nodes = [{"label": label, "multiplicity": m, "dimension": dim} for label, m, dim in node_values(diagram, index, level)]
+    sums = diagram.sums_of(index, level)
+    entry: dict[str, Any] = {
         "level": level_to_json(diagram.tower.level_of(index)),
         "nodes": nodes,
         "sums": {"multiplicities": sums.multiplicities, "squares": sums.squares, "weighted": sums.weighted},
     }
+    algebra = diagram.algebra(index)
+    if algebra is not None:
+        entry["algebra"] = {"name": algebra.name, "dimension": algebra.dimension, "faithful": sums.faithful}
+    return entry
+
+
+def first_unfaithful_json(diagram: Diagram) -> int | float | None:
+    """The first level of the whole tower whose algebra does not act faithfully, or None."""
+    first = diagram.first_unfaithful_of_tower()
+    return None if first is None else level_to_json(diagram.tower.level_of(first))
+
+
+def level_entries(
+    diagram: Diagram, start: int, upto: int, progress: Progress | None = None, cancel: CancelToken | None = None
+) -> Iterator[dict[str, Any]]:
+    """The level objects of ``levels --json`` for start..upto, one at a time."""
+    for index, level in diagram.levels_between(start, upto, progress, cancel):
+        yield level_entry(diagram, index, level)
 
 
 def levels_document(
-    diagram: Diagram, upto: int, progress: Progress | None = None, cancel: CancelToken | None = None
+    diagram: Diagram, upto: int, progress: Progress | None = None, cancel: CancelToken | None = None,
+    start: int = 0,
 ) -> dict[str, Any]:
-    """``{"tower": spec, "levels": [...]}`` for levels 0..upto (indices), per the contract."""
-    diagram.ensure(upto, progress, cancel)
-    return {"tower": diagram.tower.spec, "levels": [level_entry(diagram, i, cancel) for i in range(upto + 1)]}
+    """``{"tower", "levels": [...], "first_unfaithful"}`` for levels start..upto (indices), per the
+    contract; levels past the built ones come by a jump where the family has one."""
+    return {
+        "tower": diagram.tower.spec,
+        "levels": list(level_entries(diagram, start, upto, progress, cancel)),
+        "first_unfaithful": first_unfaithful_json(diagram),
+    }
 
 
-def level_rows(diagram: Diagram, upto: int) -> Iterator[tuple[str, str, int, int]]:
-    """(level, label, multiplicity, dimension) for every node of levels 0..upto."""
-    for index in range(upto + 1):
+def level_rows(diagram: Diagram, upto: int, start: int = 0) -> Iterator[tuple[str, str, int, int]]:
+    """(level, label, multiplicity, dimension) for every node of levels start..upto."""
+    for index, level in diagram.levels_between(start, upto):
         shown = format_level(diagram.tower.level_of(index))
-        for label, m, dim in node_values(diagram, index):
+        for label, m, dim in node_values(diagram, index, level):
             yield shown, label, m, dim
 
 

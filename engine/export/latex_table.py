@@ -13,7 +13,7 @@ from engine.levels import format_level
 def to_latex_table(diagram: Diagram, upto: int) -> str:
     tower = diagram.tower
     diagram.ensure(upto)
-    generic = tower.generic_dimension(0) is not None
+    generic = diagram.algebra(0) is not None
     columns = "r p{0.62\\linewidth} r" + (" r" if generic else "")
     head = "$k$ & decomposition (multiplicity $\\times$ irreducible module) & $\\sum m^2$" + (" & algebra" if generic else "")
     lines = [

@@ -25,6 +25,15 @@ from __future__ import annotations
 
 from typing import Sequence
 
+from engine.capabilities import (
+    Capability,
+    ClosedForm,
+    Encodings,
+    FiniteSteps,
+    LevelJump,
+    SizeGuard,
+    finite_steps_from_closure,
+)
 from engine.errors import SpecError
 from engine.families.symmetric import SymmetricTower
 from engine.partitions import (
@@ -36,6 +45,8 @@ from engine.partitions import (
     smaller_by_one_box,
     standard_tableaux_count,
 )
+from engine.specs import Family, int_param
+from engine.tower import Edge, Tower
 from engine.specs import Family, int_param
 from engine.tower import Edge, Tower
 
@@ -121,6 +132,32 @@ class AlternatingTower(Tower):
             return m if sign else 0
         return m + self.symmetric.multiplicity(index, conjugate(lam))
 
+    def reachable(self, index: int, node: Node) -> bool:
+        lam, sign = node
+        return self.symmetric.reachable(index, lam) or self.symmetric.reachable(index, conjugate(lam))
+
+    def deep_level(self, index: int) -> dict[Node, int]:
+        """Every node with a path at this level, by the S_N closed form (restricted to A_N)."""
+        out: dict[Node, int] = {}
+        for lam in self.symmetric.deep_level(index):
+            for node in nodes_of(lam):
+                if node not in out:
+                    m = self.multiplicity(index, node)
+                    if m:
+                        out[node] = m
+        return out
+
+    def capabilities(self) -> list[Capability]:
+        found: list[Capability] = [
+            SizeGuard(self.estimate_edges),
+            ClosedForm(self.multiplicity, self.reachable, self.estimate_digits),
+            LevelJump(self.deep_level, self.estimate_digits),
+            Encodings(("labels",)),
+        ]
+        if self.n <= 18:
+            found.append(FiniteSteps(lambda: finite_steps_from_closure(self)))
+        return found
+
     def estimate_digits(self, index: int) -> int:
         return self.symmetric.estimate_digits(index)
 
@@ -164,4 +201,6 @@ FAMILY = Family(
     required=("n",),
     rank=20,
     example="alternating:n=5",
+    examples=("alternating:n=4",),
+    capabilities=(SizeGuard, ClosedForm, LevelJump, Encodings, FiniteSteps,),
 )

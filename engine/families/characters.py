@@ -12,19 +12,28 @@ from __future__ import annotations
 
 from typing import Callable, Hashable, Sequence
 
+from engine.capabilities import Capability, CharacterData, Encodings, FiniteSteps, LevelJump, SizeGuard
 from engine.class_functions import CharacterTable, Entry, decompose, mckay_matrix, sum_of_rows
 from engine.errors import SpecError
 from engine.matrix_tower import MatrixTower, NodeSet, Step
 from engine.specs import Family, choice_param
-
-
 class CharacterTower(MatrixTower):
     """A matrix tower whose labels may have several spellings (``normalize`` maps them to one)."""
 
     def __init__(self, spec: str, family: str, pattern: Sequence[Step], root: str,
-                 normalize: Callable[[str], str] | None = None) -> None:
+                 normalize: Callable[[str], str] | None = None, table: CharacterTable | None = None,
+                 module: Sequence[Entry] = (), encodings: tuple[str, ...] = ("walk",)) -> None:
         super().__init__(spec, family, pattern, root)
         self._normalize = normalize
+        self._table = table
+        self._module = tuple(module)
+        self.encodings = encodings
+
+    def capabilities(self) -> list[Capability]:
+        found = super().capabilities()
+        if self._table is not None:
+            found.append(CharacterData(self._table, self._module))
+        return found
 
     def normalize_label(self, text: str) -> str:
         if self._normalize is None:
@@ -41,13 +50,14 @@ def node_set(table: CharacterTable, values: Sequence[Hashable] | None = None) ->
 
 def character_tower(spec: str, family: str, table: CharacterTable, module: Sequence[Entry], *,
                     subgroup=None, halves: bool = True, values: Sequence[Hashable] | None = None,
-                    normalize: Callable[[str], str] | None = None) -> CharacterTower:
+                    normalize: Callable[[str], str] | None = None,
+                    encodings: tuple[str, ...] = ("walk",)) -> CharacterTower:
     """The tower of V^{⊗k}: one tensor step, or restrict/induce through ``subgroup`` (a
     ``engine.files.character_table.Subgroup``) when given and ``halves``."""
     g = node_set(table, values)
     if subgroup is None or not halves:
         step = Step("tensor", g, g, mckay_matrix(table, module))
-        return CharacterTower(spec, family, [step], table.names[0], normalize)
+        return CharacterTower(spec, family, [step], table.names[0], normalize, table, module, encodings)
     sub = subgroup.table
     h = node_set(sub)
     down = []
@@ -56,7 +66,7 @@ def character_tower(spec: str, family: str, table: CharacterTable, module: Seque
         down.append(decompose(sub, [a * b for a, b in zip(res, subgroup.module)], f"the restriction of {table.names[i]!r} ⊗ U"))
     up = tuple(tuple(row[j] for row in subgroup.restriction) for j in range(len(sub.names)))
     steps = [Step("restrict", g, h, tuple(down)), Step("induce", h, g, up)]
-    return CharacterTower(spec, family, steps, table.names[0], normalize)
+    return CharacterTower(spec, family, steps, table.names[0], normalize, table, module, encodings)
 
 
 def module_from_names(table: CharacterTable, text: str, normalize: Callable[[str], str] | None = None) -> tuple[Entry, ...]:
@@ -131,6 +141,8 @@ FAMILY = Family(
     build=_build,
     rank=70,
     example="characters:group=dihedral(5),module=r1",
+    examples=("characters:group=cyclic(3),module=2*x1", "characters:file=sessions/examples/a4-points.toml"),
+    capabilities=(SizeGuard, FiniteSteps, LevelJump, Encodings, CharacterData,),
 )
 
 
@@ -154,4 +166,5 @@ def symmetric_module_tower(spec: str, n: int, module_text: str) -> CharacterTowe
         normalize(term)  # a clear message for a partition of the wrong size
     module = module_from_names(table, module_text, normalize)
     values = [parse_partition(name) for name in table.names]
-    return character_tower(spec, "symmetric", table, module, values=values, normalize=normalize)
+    return character_tower(spec, "symmetric", table, module, values=values, normalize=normalize,
+                           encodings=("vacillating",))

@@ -10,14 +10,22 @@ given by the hook-content formula (engine.classical_dimensions).  CS_k has dimen
 
 from __future__ import annotations
 
+from fractions import Fraction
 from math import factorial, lgamma, log
 
+from engine.capabilities import (
+    AlgebraLevel,
+    Capability,
+    ClosedForm,
+    DiagramAlgebra,
+    Encodings,
+    LevelJump,
+    SizeGuard,
+)
 from engine.classical_dimensions import general_linear_dimension
 from engine.partition_tower import OneBoxTower, vector_dimension
-from engine.partitions import Partition, standard_tableaux_count
+from engine.partitions import Partition, partitions_of, standard_tableaux_count
 from engine.specs import Family
-
-
 class GeneralLinearTower(OneBoxTower):
     family = "general-linear"
     removes = False
@@ -37,12 +45,32 @@ class GeneralLinearTower(OneBoxTower):
     def dimension(self, index: int, node: Partition) -> int:
         return general_linear_dimension(self.n, node)
 
-    def generic_dimension(self, index: int) -> int:
-        """k!, the dimension of CS_k (OEIS A000142)."""
-        return factorial(index)
+    encodings = ("tableau", "updown", "labels")
 
-    def algebra_name(self, index: int) -> str:
-        return f"CS_{index}"
+    def capabilities(self) -> list[Capability]:
+        return [*super().capabilities(),
+                ClosedForm(self.multiplicity, self.on_level, self.estimate_digits, self.formula),
+                LevelJump(self.deep_level, self.estimate_digits)]
+
+    def deep_level(self, index: int) -> dict[Partition, int]:
+        """Level k at once: every partition of k with at most N rows, with f^λ (Schur–Weyl duality)."""
+        return {lam: standard_tableaux_count(lam) for lam in partitions_of(index, max_length=self.n)}
+
+    def algebra_level(self, index: int) -> AlgebraLevel:
+        """CS_k, of dimension k! (OEIS A000142), acting by permuting the tensor factors."""
+        return AlgebraLevel("symmetric-group", f"CS_{index}", index, False, self.n, None, "", "general-linear",
+                            factorial(index), Fraction(index), index)
+
+    def first_unfaithful(self) -> int:
+        """CS_k → End(V^{⊗k}) is injective iff k ≤ N: its kernel is spanned by the isotypic parts of
+        the λ with more than N rows (Schur–Weyl duality; Weyl, *The Classical Groups*, ch. IV)."""
+        return self.n + 1
+
+    def formula(self, index: int, node: Partition) -> str:
+        """f^λ for every N ≥ ℓ(λ): Schur–Weyl duality, the hook length formula."""
+        from engine.partitions import format_partition
+
+        return f"m_{format_partition(node)} = f^{format_partition(node)} (hook length formula), for every k = |λ|"
 
     def estimate_digits(self, index: int) -> int:
         """Digits of k!, the largest factor of the hook length formula (log10 k! by lgamma)."""
@@ -66,4 +94,5 @@ FAMILY = Family(
     required=("n",),
     rank=30,
     example="general-linear:n=3",
+    capabilities=(SizeGuard, ClosedForm, LevelJump, DiagramAlgebra, Encodings,),
 )

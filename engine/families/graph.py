@@ -5,6 +5,7 @@ Graphs and Towers of Algebras*, 1989, 2.1), checked by ``engine.matrix_tower``."
 
 from __future__ import annotations
 
+from engine.capabilities import Encodings, FiniteSteps, LevelJump, SizeGuard
 from engine.matrix_tower import MatrixTower
 from engine.specs import Family
 
@@ -23,4 +24,6 @@ FAMILY = Family(
     required=("file",),
     rank=80,
     example="graph:file=sessions/examples/dihedral10.toml",
+    examples=("graph:file=sessions/examples/a4-points-graph.toml",),
+    capabilities=(SizeGuard, FiniteSteps, LevelJump, Encodings,),
 )

@@ -18,9 +18,11 @@ the centralizer, injectively exactly while r + s ≤ N.
 
 from __future__ import annotations
 
+from fractions import Fraction
 from math import factorial
 from typing import Sequence
 
+from engine.capabilities import AlgebraLevel, Capability, DiagramAlgebra, Encodings, SizeGuard
 from engine.classical_dimensions import mixed_dimension
 from engine.errors import SpecError
 from engine.partition_pairs import PartitionPair, format_pair, parse_pair
@@ -30,7 +32,6 @@ from engine.specs import Family
 from engine.tower import Edge, Tower
 
 _MAX_WORD = 100_000
-
 
 class MixedTower(Tower):
     family = "mixed"
@@ -93,13 +94,27 @@ class MixedTower(Tower):
     def tensor_dimension(self, index: int) -> int:
         return self.n**index
 
+    def capabilities(self) -> list[Capability]:
+        return [SizeGuard(self.estimate_edges), Encodings(("pairs",)),
+                DiagramAlgebra(self.algebra_level, self.first_unfaithful())]
+
+    def first_unfaithful(self) -> int | None:
+        """B_{r,s}(N) → End is injective iff r + s ≤ N (the walled Brauer second fundamental
+        theorem; Koike 1989), so the first unfaithful index is N+1 when the word is that long."""
+        return self.n + 1 if self.n + 1 <= self.max_index else None
+
+    def algebra_level(self, index: int) -> AlgebraLevel:
+        """The walled Brauer algebra of the first k letters (r v's, s d's), of dimension (r+s)!
+        (Turaev 1989; Koike 1989; the sources in the module docstring)."""
+        r, s = self.counts(index)
+        return AlgebraLevel("walled-brauer", f"B_{{{r},{s}}}({self.n})", index, False, self.n, self.n,
+                            self.word[:index], "general-linear", factorial(index), Fraction(index), index)
+
     def generic_dimension(self, index: int) -> int:
-        """(r+s)!, the dimension of B_{r,s}(N)."""
-        return factorial(index)
+        return self.algebra_level(index).dimension
 
     def algebra_name(self, index: int) -> str:
-        r, s = self.counts(index)
-        return f"B_{{{r},{s}}}({self.n})"
+        return self.algebra_level(index).name
 
     def estimate_edges(self, upto: int) -> int:
         """Σ over levels of Σ_t p_N(r−t)·p_N(s−t) nodes (p_N: partitions with at most N rows)
@@ -161,4 +176,6 @@ FAMILY = Family(
     required=("n", "word"),
     rank=33,
     example="mixed:n=3,word=vvdd",
+    examples=("mixed:n=2,word=vdvd",),
+    capabilities=(SizeGuard, DiagramAlgebra, Encodings,),
 )

@@ -14,13 +14,14 @@ onto the centralizer of O(N) in End(V^{⊗k}), injectively exactly while k ≤ N
 
 from __future__ import annotations
 
+from fractions import Fraction
+
+from engine.capabilities import AlgebraLevel, DiagramAlgebra, Encodings, SizeGuard
 from engine.classical_dimensions import orthogonal_dimension
 from engine.combinatorics import double_factorial_odd
 from engine.partition_tower import OneBoxTower, vector_dimension
 from engine.partitions import Partition
 from engine.specs import Family
-
-
 class OrthogonalTower(OneBoxTower):
     family = "orthogonal"
     removes = True
@@ -46,12 +47,16 @@ class OrthogonalTower(OneBoxTower):
     def dimension(self, index: int, node: Partition) -> int:
         return orthogonal_dimension(self.n, node)
 
-    def generic_dimension(self, index: int) -> int:
-        """(2k−1)!!, the dimension of B_k(N) (OEIS A001147)."""
-        return double_factorial_odd(index)
+    def first_unfaithful(self) -> int:
+        """B_k(N) → End(V^{⊗k}) is injective iff k ≤ N (Brauer 1937; Goodman and Wallach,
+        *Symmetry, Representations, and Invariants*, 2009, 10.2: the second fundamental theorem
+        for O(N))."""
+        return self.n + 1
 
-    def algebra_name(self, index: int) -> str:
-        return f"B_{index}({self.n})"
+    def algebra_level(self, index: int) -> AlgebraLevel:
+        """The Brauer algebra B_k(N), of dimension (2k−1)!! (OEIS A001147; Brauer 1937)."""
+        return AlgebraLevel("brauer", f"B_{index}({self.n})", index, False, self.n, self.n, "", "orthogonal",
+                            double_factorial_odd(index), Fraction(index), index)
 
 
 def _build(spec: str, params: dict[str, str]) -> OrthogonalTower:
@@ -67,4 +72,5 @@ FAMILY = Family(
     required=("n",),
     rank=31,
     example="orthogonal:n=3",
+    capabilities=(SizeGuard, DiagramAlgebra, Encodings,),
 )

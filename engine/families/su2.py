@@ -25,6 +25,7 @@ Node names (ours, stable, the dimension after the colon):
 
 from __future__ import annotations
 
+from engine.capabilities import Encodings, FiniteSteps, LevelJump, SizeGuard
 from engine.errors import SpecError
 from engine.matrix_tower import MatrixTower, NodeSet, Step
 from engine.specs import Family, choice_param, int_param
@@ -121,4 +122,6 @@ FAMILY = Family(
     required=("kind",),
     rank=60,
     example="su2:kind=icosahedral",
+    examples=("su2:kind=cyclic,m=3", "su2:kind=dihedral,m=3"),
+    capabilities=(SizeGuard, FiniteSteps, LevelJump, Encodings,),
 )

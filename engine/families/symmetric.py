@@ -17,15 +17,28 @@ from __future__ import annotations
 from math import isqrt, log10
 from typing import Iterable, Sequence
 
-from engine.combinatorics import bell, stirling2_row
+from engine.capabilities import (
+    AlgebraLevel,
+    Capability,
+    CharacterData,
+    ClosedForm,
+    DiagramAlgebra,
+    Encodings,
+    FiniteSteps,
+    LevelJump,
+    SizeGuard,
+    finite_steps_from_closure,
+)
+from engine.closed_forms import SymmetricClosedForm, symmetric_closed_form
+from engine.combinatorics import bell
 from engine.errors import SpecError
 from engine.partitions import (
     Partition,
     format_partition,
+    larger_by_one_box,
     parse_partition,
     partition_count,
-    larger_by_one_box,
-    skew_tableaux_count,
+    partitions_of,
     smaller_by_one_box,
     standard_tableaux_count,
 )
@@ -94,36 +107,67 @@ class SymmetricTower(Tower):
         return self.n ** self._k(index)
 
     def generic_dimension(self, index: int) -> int:
-        """Bell(2k) at level k, Bell(2k+1) at k+1/2 (dimension of P_k(N), OEIS A000110)."""
-        k = self._k(index)
-        return bell(2 * k + 1) if self._is_half(index) else bell(2 * k)
+        return self.algebra_level(index).dimension
 
     def algebra_name(self, index: int) -> str:
-        k = self._k(index)
-        return f"P_{{{k}+1/2}}({self.n})" if self._is_half(index) else f"P_{k}({self.n})"
+        return self.algebra_level(index).name
 
     def reachable(self, index: int, node: Partition) -> bool:
         k = self._k(index)
         top = self.n - 1 if self._is_half(index) else self.n
         return sum(node) == top and top - (node[0] if node else 0) <= k
 
-    def multiplicity(self, index: int, node: Partition) -> int:
-        """Closed form, no path counting.
+    def closed_form(self, index: int, node: Partition) -> SymmetricClosedForm:
+        """m_λ(k) = Σ_t S(k,t)·f^{λ/(N−t)}, m_μ(k+1/2) = Σ_t S(k+1,t+1)·f^{μ/(N−1−t)}
+        (``engine.closed_forms``, where the sources are)."""
+        return symmetric_closed_form(self.n, node, self._is_half(index))
 
-        V^{⊗k} ≅ ⊕_t S(k,t) · Ind_{S_{N−t}}^{S_N} 1 (orbits of S_N on [N]^k are set partitions of
-        [k] into t ≤ N blocks; Jones 1994, Martin 1994), and Ind_{S_{N−t}}^{S_N} 1 contains S^λ
-        f^{λ/(N−t)} times (Pieri rule; Macdonald I.5).  Hence m_λ(k) = Σ_t S(k,t)·f^{λ/(N−t)}; at
-        k+1/2, restricting to S_{N−1}: m_μ(k+1/2) = Σ_t S(k+1,t+1)·f^{μ/(N−1−t)}.
-        """
+    def multiplicity(self, index: int, node: Partition) -> int:
+        """The closed form at this level; 0 for nodes without a path.  Without half levels a
+        whole step restricts and induces, so level k is the integer level k of the tower."""
         if not self.reachable(index, node):
             return 0
+        return self.closed_form(index, node).value(self._k(index))
+
+    def deep_level(self, index: int) -> dict[Partition, int]:
+        """Every node with a path at this level and its multiplicity, by the closed form."""
+        top = self.n - 1 if self._is_half(index) else self.n
         k = self._k(index)
-        if self._is_half(index):
-            top = self.n - 1
-            row = stirling2_row(k + 1, top + 1)
-            return sum(row[t + 1] * skew_tableaux_count(node, (top - t,) if top - t else ()) for t in range(top + 1))
-        row = stirling2_row(k, self.n)
-        return sum(row[t] * skew_tableaux_count(node, (self.n - t,) if self.n - t else ()) for t in range(self.n + 1))
+        return {lam: self.multiplicity(index, lam) for lam in partitions_of(top) if top - lam[0] <= k} if top else \
+            {(): self.multiplicity(index, ())}
+
+    def capabilities(self) -> list[Capability]:
+        found: list[Capability] = [
+            SizeGuard(self.estimate_edges),
+            ClosedForm(self.multiplicity, self.reachable, self.estimate_digits, self.formula, self.closed_form),
+            LevelJump(self.deep_level, self.estimate_digits),
+            DiagramAlgebra(self.algebra_level, self.first_unfaithful()),
+            Encodings(("vacillating", "updown") if self.halves else ("vacillating",),
+                      set_partition_tableaux=self._set_partition_tableaux if self.halves else None),
+        ]
+        if self.n <= 18:  # p(18) + p(17) = 682 nodes: the step matrices stay small
+            found.append(FiniteSteps(lambda: finite_steps_from_closure(self)))
+        return found
+
+    def first_unfaithful(self) -> int:
+        """P_k(N) acts faithfully on V^{⊗k} iff 2k ≤ N, P_{k+1/2}(N) iff 2k+1 ≤ N (Jones 1994;
+        Martin 1994; a 2005 survey of partition algebras states it as a theorem): the
+        centralizer has dimension Σ_{j≤N} S(2k, j), which is Bell(2k) iff 2k ≤ N."""
+        return self.n + 1 if self.halves else self.n // 2 + 1
+
+    def _set_partition_tableaux(self, index: int, node: Partition) -> object:
+        from engine.set_partition_tableaux import SetPartitionTableaux
+
+        return SetPartitionTableaux(self.n, index, node)
+
+    def algebra_level(self, index: int) -> AlgebraLevel:
+        """P_k(N), of dimension Bell(2k), and P_{k+1/2}(N), of dimension Bell(2k+1) (OEIS A000110;
+        Martin 1994, Jones 1994).  Without half levels, P_k(N) at every level."""
+        k = self._k(index)
+        half = self._is_half(index)
+        name = f"P_{{{k}+1/2}}({self.n})" if half else f"P_{k}({self.n})"
+        return AlgebraLevel("partition", name, k + 1 if half else k, half, self.n, self.n, "", "symmetric",
+                            bell(2 * k + 1) if half else bell(2 * k), self.level_of(index), index)
 
     def estimate_digits(self, index: int) -> int:
         """Digits of N^(k+1) at most: the closed form sums terms C(t,j)·j^k (j ≤ t ≤ N), and the
@@ -132,9 +176,7 @@ class SymmetricTower(Tower):
 
     def formula(self, index: int, node: Partition) -> str:
         """m in k by the Stirling-number closed form (engine.closed_forms)."""
-        from engine.closed_forms import symmetric_closed_form
-
-        form = symmetric_closed_form(self, index, node)
+        form = self.closed_form(index, node)
         return f"{form.name()} = {form.stirling_text()}"
 
     def level_size(self, index: int) -> int:
@@ -202,5 +244,7 @@ FAMILY = Family(
     required=("n",),
     rank=10,
     example="symmetric:n=4",
+    examples=("symmetric:n=3,halves=no", "symmetric:n=4,module=(3,1)"),
+    capabilities=(SizeGuard, ClosedForm, LevelJump, DiagramAlgebra, Encodings, FiniteSteps, CharacterData,),
 )
 

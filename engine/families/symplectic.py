@@ -15,14 +15,15 @@ Temperley–Lieb algebra TL_k (Temperley and Lieb, Proc. Roy. Soc. A 322, 1971; 
 
 from __future__ import annotations
 
+from fractions import Fraction
+
+from engine.capabilities import AlgebraLevel, DiagramAlgebra, Encodings, SizeGuard
 from engine.classical_dimensions import symplectic_dimension
 from engine.combinatorics import catalan, double_factorial_odd
 from engine.errors import SpecError
 from engine.partition_tower import OneBoxTower, vector_dimension
 from engine.partitions import Partition
 from engine.specs import Family
-
-
 class SymplecticTower(OneBoxTower):
     family = "symplectic"
     removes = True
@@ -42,14 +43,20 @@ class SymplecticTower(OneBoxTower):
     def dimension(self, index: int, node: Partition) -> int:
         return symplectic_dimension(self.n, node)
 
-    def generic_dimension(self, index: int) -> int:
-        """Catalan(k) for TL_k when n = 2 (OEIS A000108), else (2k−1)!! for B_k(−n) (A001147)."""
-        if self.n == 2:
-            return catalan(index)
-        return double_factorial_odd(index)
+    def first_unfaithful(self) -> int | None:
+        """B_k(−2M) → End(V^{⊗k}) is injective iff k ≤ M (Goodman and Wallach 2009, 10.2: the second
+        fundamental theorem for Sp(2M)); TL_k(−2) is the whole centralizer of SL_2 at every k
+        (Temperley–Lieb; Goodman, de la Harpe, Jones 1989, 2.8), so faithful throughout."""
+        return None if self.n == 2 else self.n // 2 + 1
 
-    def algebra_name(self, index: int) -> str:
-        return f"TL_{index}" if self.n == 2 else f"B_{index}(-{self.n})"
+    def algebra_level(self, index: int) -> AlgebraLevel:
+        """TL_k(−2) when n = 2, of dimension Catalan(k) (OEIS A000108; Temperley and Lieb 1971),
+        else the Brauer algebra B_k(−n), of dimension (2k−1)!! (OEIS A001147; Brauer 1937)."""
+        if self.n == 2:
+            return AlgebraLevel("temperley-lieb", f"TL_{index}", index, False, 2, -2, "", "symplectic",
+                                catalan(index), Fraction(index), index)
+        return AlgebraLevel("brauer", f"B_{index}(-{self.n})", index, False, self.n, -self.n, "", "symplectic",
+                            double_factorial_odd(index), Fraction(index), index)
 
 
 def _build(spec: str, params: dict[str, str]) -> SymplecticTower:
@@ -67,4 +74,6 @@ FAMILY = Family(
     required=("n",),
     rank=32,
     example="symplectic:n=4",
+    examples=("symplectic:n=2",),
+    capabilities=(SizeGuard, DiagramAlgebra, Encodings,),
 )

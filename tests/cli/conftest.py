@@ -4,7 +4,7 @@ import sys
 
 import pytest
 
-from tui.cli import main
+from tui.cli.main import main
 
 
 def main_output(capsys, *args: str) -> tuple[int, str, str]:
@@ -36,4 +36,4 @@ def run_json(capsys):
 
 def run_process(*args: str) -> subprocess.CompletedProcess:
     """The real command in a subprocess (for exit statuses and stderr as a user sees them)."""
-    return subprocess.run([sys.executable, "-m", "tui.cli", *args], capture_output=True, text=True, timeout=120)
+    return subprocess.run([sys.executable, "-m", "tui.cli.main", *args], capture_output=True, text=True, timeout=120)

@@ -9,7 +9,7 @@ from pathlib import Path
 import pytest
 
 from engine.errors import UserError
-from tui.commands.groups import add_commands
+from tui.cli.commands.groups import add_commands
 
 EXAMPLES = Path(__file__).resolve().parents[2] / "sessions" / "examples"
 

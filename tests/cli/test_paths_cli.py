@@ -8,7 +8,7 @@ import sys
 
 import pytest
 
-from tui.cli import main
+from tui.cli.main import main
 
 
 def run_json(capsys, *argv):
@@ -94,7 +94,7 @@ def test_bad_input_is_one_line_and_exit_2(capsys, argv, message):
 def test_a_path_starting_with_a_minus_sign_is_a_positional_argument():
     # common practice for argparse: an argument holding a space is never taken for an option
     result = subprocess.run(
-        [sys.executable, "-m", "tui.cli", "rank", "symmetric:n=3", "--level", "1", "--label", "(2,1)",
+        [sys.executable, "-m", "tui.cli.main", "rank", "symmetric:n=3", "--level", "1", "--label", "(2,1)",
          "--encoding", "updown", "-1 +2"],
         capture_output=True, text=True,
     )

@@ -1,5 +1,5 @@
-"""Small hand-made towers for the path tests, standing in for families merged elsewhere (each has
-the family name whose encodings it exercises) and for towers with multiple edges.
+"""Small hand-made towers for the path tests, standing in for families merged elsewhere (each
+declares the path encodings of the family it stands for) and for towers with multiple edges.
 
 Their graphs are the textbook ones: Young's lattice (Sagan, *The Symmetric Group*, §5.1), the
 stable Brauer branching graph (add or remove one box; Goodman and Wallach, *Symmetry,
@@ -8,6 +8,7 @@ Representations, and Invariants*, ch. 10), the stable walled Brauer graph on pai
 
 from __future__ import annotations
 
+from engine.capabilities import Encodings
 from engine.matrix_tower import MatrixTower, NodeSet, Step
 from engine.partitions import (
     Partition,
@@ -21,6 +22,11 @@ from engine.tower import Tower
 
 class _PartitionTower(Tower):
     """Shared plumbing: partitions as labels, dimensions not used by the path tests (set to 1)."""
+
+    encodings: tuple[str, ...] = ("updown", "labels")
+
+    def capabilities(self):
+        return [Encodings(self.encodings)]
 
     def dimension(self, index, node):
         return 1
@@ -42,6 +48,7 @@ class YoungLatticeTower(_PartitionTower):
     """GL_N on C^N: level k holds the partitions of k with at most N rows; a step adds a box."""
 
     family = "general-linear"
+    encodings = ("tableau", "updown", "labels")
 
     def __init__(self, n: int) -> None:
         super().__init__(f"test-general-linear:n={n}")
@@ -72,6 +79,9 @@ class WalledTower(Tower):
     """The stable range of GL_N on a word in V and V*: nodes are pairs (λ, μ)."""
 
     family = "mixed"
+
+    def capabilities(self):
+        return [Encodings(("pairs",))]
 
     def __init__(self, word: str) -> None:
         super().__init__(f"test-mixed:word={word}")

@@ -8,9 +8,9 @@ from pathlib import Path
 import pytest
 from textual.worker import WorkerCancelled
 
-from tui.app import ExplorerApp
-from tui.session_files import read_session
-from tui.state import state_for_spec
+from tui.explorer.app import ExplorerApp
+from tui.explorer.session_files import read_session
+from tui.explorer.state import state_for_spec
 
 DATA = Path(__file__).parent / "data"
 SMALL = DATA / "small.json"

@@ -12,7 +12,7 @@ import pytest
 
 from engine.diagram import Diagram
 from engine.specs import families, parse_spec
-from tui.screens.path_browser import PathBrowser
+from tui.explorer.screens.path_browser import PathBrowser
 
 from .conftest import app_on, settle
 

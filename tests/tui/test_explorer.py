@@ -8,12 +8,12 @@ from pathlib import Path
 
 from sympy.functions.combinatorial.numbers import stirling
 
-from tui.actions import ALL
-from tui.messages import PathShown
-from tui.screens.prompt import Prompt
-from tui.widgets.details import DetailsPane
-from tui.widgets.level_pane import LevelPane
-from tui.widgets.sums_bar import SumsBar
+from tui.explorer.actions import ALL
+from tui.explorer.messages import PathShown
+from tui.explorer.screens.prompt import Prompt
+from tui.explorer.widgets.details import DetailsPane
+from tui.explorer.widgets.level_pane import LevelPane
+from tui.explorer.widgets.sums_bar import SumsBar
 
 from .conftest import app_on, settle
 
@@ -177,14 +177,14 @@ async def test_path_key_opens_the_browser_or_says_why_not() -> None:
         await settle(pilot)
         await pilot.press("p")
         await pilot.pause()
-        if importlib.util.find_spec("tui.screens.path_browser") is None:
+        if importlib.util.find_spec("tui.explorer.screens.path_browser") is None:
             assert any(n.message == "path browser not available" for n in app._notifications)
         else:
             assert type(app.screen).__name__ == "PathBrowser"
 
 
 async def test_every_action_is_in_the_palette_and_the_help() -> None:
-    from tui.screens.help import help_text
+    from tui.explorer.screens.help import help_text
 
     app = app_on("symmetric:n=4", search_faithful=False)
     async with app.run_test() as pilot:

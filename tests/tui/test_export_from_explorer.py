@@ -8,7 +8,7 @@ from pathlib import Path
 from engine.diagram import Diagram
 from engine.export.latex_table import to_latex_table
 from engine.specs import parse_spec
-from tui.screens.prompt import Prompt
+from tui.explorer.screens.prompt import Prompt
 
 from .conftest import app_on, settle
 

@@ -8,8 +8,8 @@ from textual.widgets import Input, Static
 from engine.diagram import Diagram
 from engine.specs import parse_spec
 from tests.engine.path_towers import YoungLatticeTower
-from tui.messages import PathShown
-from tui.screens.path_browser import PathBrowser, show_int
+from tui.explorer.messages import PathShown
+from tui.explorer.screens.path_browser import PathBrowser, show_int
 
 
 class BrowserApp(App):

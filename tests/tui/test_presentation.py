@@ -5,7 +5,7 @@ from __future__ import annotations
 import pytest
 
 from tui.numbers import digit_count, exact_int, short_int
-from tui.young import draw_boxes, draw_label, shapes_of_label
+from tui.explorer.young import draw_boxes, draw_label, shapes_of_label
 
 
 @pytest.mark.parametrize("n", [0, 9, 10, 99, 10**17, 10**18 - 1, 10**18, 751 * 10**37, 10**40 - 1, 10**40, 2**4000])

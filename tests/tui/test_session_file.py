@@ -20,7 +20,7 @@ from engine.files.session import (
     save_session,
     session_to_json,
 )
-from tui.session_files import read_session
+from tui.explorer.session_files import read_session
 
 SESSIONS = Path(__file__).resolve().parents[2] / "sessions"
 

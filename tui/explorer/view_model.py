@@ -10,10 +10,10 @@ from engine.diagram import Diagram
 from engine.levels import format_level
 from engine.tower import Node
 from tui.numbers import short_int
-from tui.state import ExplorerState
-from tui.widgets.details import NodeDetails
-from tui.widgets.level_pane import LevelRows, PaneMarks
-from tui.widgets.sums_bar import SumsLine
+from tui.explorer.state import ExplorerState
+from tui.explorer.widgets.details import NodeDetails
+from tui.explorer.widgets.level_pane import LevelRows, PaneMarks
+from tui.explorer.widgets.sums_bar import SumsLine
 
 #: levels with at most this many nodes get their dimension column sized exactly
 EXACT_COLUMNS_UP_TO = 2000
@@ -119,7 +119,7 @@ def node_details(state: ExplorerState) -> NodeDetails | None:
         child_level=level_text(diagram, index + 1) if has_next else None,
         note=state.notes.get((index, node), ""),
         bookmarked=(index, node) in state.bookmarks,
-        formula=tower.formula(index, node),
+        formula=diagram.formula(index, node),
     )
 
 
@@ -146,7 +146,7 @@ def sums_line(state: ExplorerState, unfaithful: tuple[int, int | None] | None) -
         weighted=sums.weighted,
         tensor_dimension=sums.tensor_dimension,
         generic_dimension=sums.generic_dimension,
-        algebra=tower.algebra_name(index),
+        algebra=None if (algebra := diagram.algebra(index)) is None else algebra.name,
         unfaithful_from=found,
         searched=searched,
     )

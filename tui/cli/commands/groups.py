@@ -63,7 +63,7 @@ def run_mckay(args: argparse.Namespace) -> int:
 
 
 def _print_matrix(step: dict[str, Any], title: str) -> None:
-    from tui.cli_support import console
+    from tui.cli.support import console
     from rich.table import Table
 
     table = Table(title=title, title_justify="left")
@@ -139,7 +139,7 @@ def run_check(args: argparse.Namespace) -> int:
     if args.json:
         print(json.dumps(report))
         return 0
-    from tui.cli_support import console as make_console
+    from tui.cli.support import console as make_console
 
     out = make_console()
 

@@ -15,12 +15,12 @@ def add_commands(sub: argparse._SubParsersAction) -> None:
 
 
 def run_open(args: argparse.Namespace) -> int:
-    from tui.launch import launch
+    from tui.explorer.launch import launch
 
     return launch(session_file=args.file)
 
 
 def run_explore(args: argparse.Namespace) -> int:
-    from tui.launch import launch
+    from tui.explorer.launch import launch
 
     return launch(spec=args.spec)

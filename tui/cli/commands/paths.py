@@ -5,7 +5,7 @@ from __future__ import annotations
 import argparse
 import sys
 
-from tui.cli_support import build_levels, level_index, node_at, open_diagram, print_json
+from tui.cli.support import build_levels, level_index, node_at, open_diagram, print_json
 
 _ORDER = (
     "Paths are ranked 0..total-1 by their last step first: the parent in the level's display order, "

@@ -6,7 +6,7 @@ from __future__ import annotations
 import argparse
 import sys
 
-from tui.cli_support import level_index, node_at, print_json
+from tui.cli.support import level_index, node_at, print_json
 
 
 def add_commands(sub: argparse._SubParsersAction) -> None:
@@ -32,16 +32,17 @@ def run(args: argparse.Namespace) -> int:
     from engine.errors import UserError
     from engine.levels import level_to_json
     from engine.paths import parse_rank
-    from engine.set_partition_tableaux import SetPartitionTableaux
+    from engine.capabilities import Encodings
     from engine.specs import parse_spec
 
     tower = parse_spec(args.spec)
-    if tower.family != "symmetric" or not getattr(tower, "halves", False):
+    encodings = tower.capability(Encodings)
+    if encodings is None or encodings.set_partition_tableaux is None:
         raise UserError(f"set-partition tableaux are for symmetric:n=N towers with half levels, not {tower.spec}")
     index = level_index(tower, args.level)
     node = node_at(tower, index, args.label)
     Diagram(tower).check_digits(index)  # the count is the closed form: refuse what it cannot finish
-    basis = SetPartitionTableaux(tower.n, index, node)
+    basis = encodings.set_partition_tableaux(index, node)
     total = basis.total
     if total == 0:
         raise UserError(f"{args.label!r} is not reached at level {args.level} of {tower.spec} (no tableaux)")

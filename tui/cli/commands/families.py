@@ -4,7 +4,7 @@ from __future__ import annotations
 
 import argparse
 
-from tui.cli_support import print_json
+from tui.cli.support import print_json
 
 
 def add_commands(sub: argparse._SubParsersAction) -> None:
@@ -23,7 +23,7 @@ def run(args: argparse.Namespace) -> int:
              for f in found.values()]
         )
         return 0
-    from tui.tables import print_families
+    from tui.cli.tables import print_families
 
     print_families(list(found.values()))
     return 0

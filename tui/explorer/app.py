@@ -21,13 +21,13 @@ from engine.errors import Cancelled, UserError
 from engine.files.session import save_session
 from engine.levels import format_level, parse_level
 from engine.tower import Node
-from tui import view_model as vm
-from tui.actions import ALL, GLOBAL, Act, bindings, key_text
-from tui.messages import BuildFailed, BuildProgress, FaithfulFound, LevelsReady, PathShown
-from tui.screens.main import MainScreen
-from tui.screens.prompt import Prompt
-from tui.session_files import check_open_path, check_save_path, read_session, resolve
-from tui.state import ExplorerState, state_for_spec
+from tui.explorer import view_model as vm
+from tui.explorer.actions import ALL, GLOBAL, Act, bindings, key_text
+from tui.explorer.messages import BuildFailed, BuildProgress, FaithfulFound, LevelsReady, PathShown
+from tui.explorer.screens.main import MainScreen
+from tui.explorer.screens.prompt import Prompt
+from tui.explorer.session_files import check_open_path, check_save_path, read_session, resolve
+from tui.explorer.state import ExplorerState, state_for_spec
 
 
 class ExplorerApp(App[None]):
@@ -157,7 +157,7 @@ class ExplorerApp(App[None]):
     def _start_faithful_search(self) -> None:
         diagram, index = self.state.diagram, self.state.index
         known = self.unfaithful()
-        if not self.search_faithful or diagram.tower.generic_dimension(0) is None:
+        if not self.search_faithful or diagram.algebra(0) is None:
             return
         if known is not None and (known[1] is not None or known[0] >= index):
             return
@@ -247,7 +247,7 @@ class ExplorerApp(App[None]):
         self.push_screen(Prompt("Jump to a level", "Level (3, 2.5, 5/2 or 2+1/2):", check=check), done)
 
     def ask_node(self) -> None:
-        from tui.screens.find_node import FindNode
+        from tui.explorer.screens.find_node import FindNode
 
         index = self.state.index
 
@@ -287,7 +287,7 @@ class ExplorerApp(App[None]):
         self.view_changed()
 
     def ask_tower(self) -> None:
-        from tui.screens.tower_form import TowerForm
+        from tui.explorer.screens.tower_form import TowerForm
 
         self.push_screen(TowerForm(self.state.spec), self._open_spec)
 
@@ -346,7 +346,7 @@ class ExplorerApp(App[None]):
         if self.state.node is None:
             return
         try:
-            from tui.screens.path_browser import PathBrowser  # type: ignore[import-not-found]
+            from tui.explorer.screens.path_browser import PathBrowser  # type: ignore[import-not-found]
         except ImportError:
             self.notify("path browser not available", severity="warning")
             return
@@ -354,7 +354,7 @@ class ExplorerApp(App[None]):
 
     # ----- help and the command palette -------------------------------------------------------------------
     def action_show_help(self) -> None:
-        from tui.screens.help import HelpScreen
+        from tui.explorer.screens.help import HelpScreen
 
         if not isinstance(self.screen, HelpScreen):
             self.push_screen(HelpScreen())

@@ -12,7 +12,7 @@ from engine.files.atomic import write_text_atomic
 from engine.levels import format_level
 
 if TYPE_CHECKING:
-    from tui.app import ExplorerApp
+    from tui.explorer.app import ExplorerApp
 
 
 def export_path(text: str) -> Path:
@@ -47,7 +47,7 @@ def default_name(app: ExplorerApp) -> str:
 
 
 def ask_export(app: ExplorerApp) -> None:
-    from tui.screens.prompt import Prompt
+    from tui.explorer.screens.prompt import Prompt
 
     state = app.state
     diagram, upto = state.diagram, state.index

@@ -4,7 +4,7 @@ from __future__ import annotations
 
 import argparse
 
-from tui.cli_support import build_levels, level_index, node_at, open_diagram, print_json
+from tui.cli.support import build_levels, level_index, node_at, open_diagram, print_json
 
 
 def add_commands(sub: argparse._SubParsersAction) -> None:
@@ -29,13 +29,13 @@ def run(args: argparse.Namespace) -> int:
     index = level_index(tower, args.level)
     node = node_at(tower, index, args.label)
     diagram.check_digits(index)
-    if not tower.has_closed_form:
+    if not diagram.has_closed_form:
         build_levels(diagram, index)
     document = node_document(diagram, index, node, args.label)
     if args.json:
         print_json(document)
     else:
-        from tui.tables import print_node
+        from tui.cli.tables import print_node
 
         print_node(tower.spec, tower.level_kind(index), document)
     return 0

@@ -9,7 +9,7 @@ from textual.containers import Vertical, VerticalScroll
 from textual.screen import ModalScreen
 from textual.widgets import Static
 
-from tui.actions import ALL, Act, key_text
+from tui.explorer.actions import ALL, Act, key_text
 
 INTRO = (
     "Each pane is one level of the tower: every node with its multiplicity m (how often the "

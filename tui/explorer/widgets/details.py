@@ -10,7 +10,7 @@ from textual.containers import VerticalScroll
 from textual.widgets import Static
 
 from tui.numbers import exact_int, wrap_text
-from tui.young import draw_label
+from tui.explorer.young import draw_label
 
 
 @dataclass

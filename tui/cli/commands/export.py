@@ -5,7 +5,7 @@ from __future__ import annotations
 import argparse
 import sys
 
-from tui.cli_support import build_levels, level_index, open_diagram
+from tui.cli.support import build_levels, level_index, open_diagram
 
 FORMATS = ("tikz", "latex", "dot", "csv", "json")  # engine.export.FORMATS, kept literal for a quick --help
 

@@ -21,7 +21,7 @@ from engine.errors import UserError
 from engine.levels import format_level
 from engine.paths import PathIndex, parse_rank
 from engine.tower import Node
-from tui.messages import PathShown
+from tui.explorer.messages import PathShown
 
 _LOG10_2 = 0.30102999566398120
 

@@ -12,8 +12,8 @@ from pathlib import Path
 
 def launch(session_file: str | None = None, spec: str | None = None) -> int:
     sys.set_int_max_str_digits(0)
-    from tui.session_files import demo_session_path, read_session
-    from tui.state import state_for_spec
+    from tui.explorer.session_files import demo_session_path, read_session
+    from tui.explorer.state import state_for_spec
 
     demo = False
     if spec is not None:
@@ -23,7 +23,7 @@ def launch(session_file: str | None = None, spec: str | None = None) -> int:
     else:
         state = read_session(demo_session_path())
         demo = True
-    from tui.app import ExplorerApp
+    from tui.explorer.app import ExplorerApp
 
     ExplorerApp(state, demo=demo).run()
     return 0

@@ -10,14 +10,14 @@ from textual.screen import Screen
 from textual.widgets import Footer, ProgressBar
 
 from engine.files.session import MAX_PANES
-from tui import view_model as vm
-from tui.actions import MAIN, bindings
-from tui.widgets.details import DetailsPane
-from tui.widgets.level_pane import LevelPane
-from tui.widgets.sums_bar import SumsBar
+from tui.explorer import view_model as vm
+from tui.explorer.actions import MAIN, bindings
+from tui.explorer.widgets.details import DetailsPane
+from tui.explorer.widgets.level_pane import LevelPane
+from tui.explorer.widgets.sums_bar import SumsBar
 
 if TYPE_CHECKING:
-    from tui.app import ExplorerApp
+    from tui.explorer.app import ExplorerApp
 
 
 class MainScreen(Screen[None]):
@@ -161,7 +161,7 @@ class MainScreen(Screen[None]):
         self.explorer.ask_open()
 
     def action_export_levels(self) -> None:
-        from tui.exporting import ask_export
+        from tui.explorer.exporting import ask_export
 
         ask_export(self.explorer)
 

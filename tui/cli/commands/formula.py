@@ -5,7 +5,7 @@ from __future__ import annotations
 import argparse
 import sys
 
-from tui.cli_support import print_json
+from tui.cli.support import print_json
 
 
 def add_commands(sub: argparse._SubParsersAction) -> None:
@@ -23,40 +23,19 @@ def add_commands(sub: argparse._SubParsersAction) -> None:
 
 
 def run(args: argparse.Namespace) -> int:
-    from engine.closed_forms import closed_form_tower, symmetric_closed_form
     from engine.errors import UserError
-    from engine.partitions import parse_partition
+    from engine.export.formula_document import closed_form_of, formula_document
     from engine.specs import parse_spec
 
-    tower = closed_form_tower(parse_spec(args.spec))
-    node = parse_partition(args.label)
-    n, halves = tower.n, tower.halves
-    if sum(node) == n:
-        index = 0
-    elif sum(node) == n - 1 and halves:
-        index = 1
-    else:
-        wanted = f"a partition of {n}" + (f" (or of {n - 1} for half levels)" if halves else "")
-        raise UserError(f"{args.label!r} is not {wanted}")
+    tower = parse_spec(args.spec)
     if args.check < 0:
         raise UserError(f"--check must be 0 or more, got {args.check}")
-    form = symmetric_closed_form(tower, index, node)
-    values = [form.value(k) for k in range(args.check + 1)]
+    form = closed_form_of(tower, args.label)
+    document = formula_document(tower, form, args.check)
     if args.json:
-        print_json(
-            {
-                "tower": tower.spec,
-                "label": tower.format(node),
-                "levels": "half" if form.half else "integer",
-                "stirling": [{"t": t, "coefficient": c} for t, c in sorted(form.stirling.items())],
-                "powers": [
-                    {"base": j, "numerator": b.numerator, "denominator": b.denominator}
-                    for j, b in sorted(form.powers.items(), reverse=True)
-                ],
-                "values": values,
-            }
-        )
+        print_json(document)
         return 0
+    values = document["values"]
     out = sys.stdout
     out.write(f"{form.name()} on {tower.spec}, for every k ≥ 0 (S = Stirling numbers of the second kind):\n")
     out.write(f"  = {form.stirling_text()}\n")

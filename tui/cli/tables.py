@@ -6,28 +6,28 @@ from typing import Any, Sequence
 
 from engine.diagram import Diagram
 from engine.levels import format_level
-from tui.cli_support import console
+from tui.cli.support import console
 
 
 def _level_text(value: int | float) -> str:
     return str(value) if isinstance(value, int) else f"{value:g}"
 
 
-def print_levels(diagram: Diagram, upto: int, nodes: bool = True) -> None:
+def print_levels(diagram: Diagram, upto: int, nodes: bool = True, start: int = 0) -> None:
     from rich.table import Table
 
     out = console()
     tower = diagram.tower
+    levels = list(diagram.levels_between(start, upto))
     if nodes:
-        for index in range(upto + 1):
-            level = diagram.level(index)
+        for index, level in levels:
             kind = tower.level_kind(index)
             title = f"level {format_level(tower.level_of(index))}" + (f"  ({kind})" if kind else "")
             table = Table(title=title, title_justify="left", show_edge=False, pad_edge=False)
             table.add_column("node")
             table.add_column("multiplicity", justify="right", overflow="fold")
             table.add_column("dimension", justify="right", overflow="fold")
-            for node in diagram.nodes(index):
+            for node in tower.sort_nodes(level, index) if index > diagram.built else diagram.nodes(index):
                 table.add_row(tower.format(node), str(level[node]), str(tower.dimension(index, node)))
             out.print(table)
             out.print()
@@ -38,37 +38,35 @@ def print_levels(diagram: Diagram, upto: int, nodes: bool = True) -> None:
     table.add_column("Σm² (centralizer)", justify="right", overflow="fold")
     table.add_column("Σm·dim", justify="right", overflow="fold")
     table.add_column("= dim V^⊗k")
-    generic = tower.generic_dimension(0) is not None
+    generic = diagram.algebra(0) is not None
     if generic:
         table.add_column("diagram algebra")
         table.add_column("its dimension", justify="right", overflow="fold")
         table.add_column("faithful")
-    first_bad = None
-    for index in range(upto + 1):
-        sums = diagram.sums(index)
+    for index, level in levels:
+        sums = diagram.sums_of(index, level)
         row = [
             format_level(tower.level_of(index)),
-            str(len(diagram.level(index))),
+            str(len(level)),
             str(sums.multiplicities),
             str(sums.squares),
             str(sums.weighted),
             "yes" if sums.consistent else f"NO ({sums.tensor_dimension})",
         ]
         if generic:
-            row.append(tower.algebra_name(index) or "")
+            row.append(diagram.algebra(index).name)
             row.append(str(sums.generic_dimension))
             row.append("yes" if sums.faithful else "no")
-            if not sums.faithful and first_bad is None:
-                first_bad = index
         table.add_row(*row)
     out.print(table)
     if generic:
+        first_bad = diagram.first_unfaithful_of_tower()
         if first_bad is None:
-            out.print(f"The diagram algebra acts faithfully on every level up to {format_level(tower.level_of(upto))}.")
+            out.print("The diagram algebra acts faithfully on every level of the tower.")
         else:
             out.print(
                 f"The diagram algebra stops acting faithfully at level {format_level(tower.level_of(first_bad))} "
-                "(Σm² falls below its dimension there)."
+                "(Σm² falls below its dimension there and at every level after)."
             )
 
 

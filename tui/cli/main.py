@@ -24,7 +24,7 @@ class _Parser(argparse.ArgumentParser):
 
 
 def build_parser() -> argparse.ArgumentParser:
-    from tui.commands import COMMAND_MODULES
+    from tui.cli.commands import COMMAND_MODULES
 
     parser = _Parser(
         prog="towerscope",

@@ -23,7 +23,7 @@ def default_folder() -> Path:
 
 def demo_session_path() -> Path:
     """sessions/demo.json of the source tree, or the copy installed with the package."""
-    source = Path(__file__).resolve().parent.parent / "sessions" / DEMO_NAME
+    source = Path(__file__).resolve().parents[2] / "sessions" / DEMO_NAME
     if source.is_file():
         return source
     from importlib.resources import files
@@ -66,7 +66,7 @@ def check_open_path(text: str) -> tuple[str | None, str]:
 
 def read_session(path: Path):  # noqa: ANN201 - an ExplorerState
     """Load a session file and check it against its tower; UserError on any problem."""
-    from tui.state import state_from_session
+    from tui.explorer.state import state_from_session
 
     session = load_session(path)
     try:
