@@ -166,7 +166,7 @@ class FiniteSteps(Capability):
     ``steps[0].rows[root_position]``.  The matrices are made on first use (``make``), since
     finding them may walk the whole node set."""
 
-    title = "finite steps (a tower with finite node sets)"
+    title = "a finite step matrix"
 
     def __init__(self, make: Callable[[], "FiniteSteps | tuple[tuple[StepMatrix, ...], int]"]) -> None:
         self._make = make
@@ -248,6 +248,18 @@ class Encodings(Capability):
     title = "path encodings"
 
 
+def finite_steps_of_size(tower: "Tower", nodes: int, limit: int = 2000) -> FiniteSteps:
+    """FiniteSteps found by closure, refused in one line (with the count) when the node sets hold
+    more than ``limit`` nodes."""
+    def make() -> FiniteSteps:
+        if nodes > limit:
+            raise UserError(f"{tower.spec}: its repeating step joins {nodes:,} nodes, too many for step matrices "
+                            f"(at most {limit:,})")
+        return finite_steps_from_closure(tower, limit)
+
+    return FiniteSteps(make)
+
+
 def finite_steps_from_closure(tower: "Tower", limit: int = 2000) -> FiniteSteps:
     """FiniteSteps of a tower whose node sets are finite, found by walking children from the root
     until each level kind's node set stops growing (McKay, *Graphs, singularities and finite
@@ -289,5 +301,5 @@ def finite_steps_from_closure(tower: "Tower", limit: int = 2000) -> FiniteSteps:
 
 __all__ = [
     "AlgebraLevel", "Capability", "CharacterData", "ClosedForm", "DiagramAlgebra", "Encodings",
-    "FiniteSteps", "LevelJump", "SizeGuard", "StepMatrix", "finite_steps_from_closure", "missing", "require",
+    "FiniteSteps", "LevelJump", "SizeGuard", "StepMatrix", "finite_steps_from_closure", "finite_steps_of_size", "missing", "require",
 ]

@@ -32,7 +32,7 @@ from engine.capabilities import (
     FiniteSteps,
     LevelJump,
     SizeGuard,
-    finite_steps_from_closure,
+    finite_steps_of_size,
 )
 from engine.errors import SpecError
 from engine.families.symmetric import SymmetricTower
@@ -42,6 +42,7 @@ from engine.partitions import (
     format_partition,
     larger_by_one_box,
     parse_partition,
+    partition_count,
     smaller_by_one_box,
     standard_tableaux_count,
 )
@@ -153,9 +154,8 @@ class AlternatingTower(Tower):
             ClosedForm(self.multiplicity, self.reachable, self.estimate_digits),
             LevelJump(self.deep_level, self.estimate_digits),
             Encodings(("labels",)),
+            finite_steps_of_size(self, 2 * (partition_count(self.n) + partition_count(self.n - 1))),
         ]
-        if self.n <= 18:
-            found.append(FiniteSteps(lambda: finite_steps_from_closure(self)))
         return found
 
     def estimate_digits(self, index: int) -> int:

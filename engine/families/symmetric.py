@@ -27,7 +27,7 @@ from engine.capabilities import (
     FiniteSteps,
     LevelJump,
     SizeGuard,
-    finite_steps_from_closure,
+    finite_steps_of_size,
 )
 from engine.closed_forms import SymmetricClosedForm, symmetric_closed_form
 from engine.combinatorics import bell
@@ -144,9 +144,8 @@ class SymmetricTower(Tower):
             DiagramAlgebra(self.algebra_level, self.first_unfaithful()),
             Encodings(("vacillating", "updown") if self.halves else ("vacillating",),
                       set_partition_tableaux=self._set_partition_tableaux if self.halves else None),
+            finite_steps_of_size(self, partition_count(self.n) + (partition_count(self.n - 1) if self.halves else 0)),
         ]
-        if self.n <= 18:  # p(18) + p(17) = 682 nodes: the step matrices stay small
-            found.append(FiniteSteps(lambda: finite_steps_from_closure(self)))
         return found
 
     def first_unfaithful(self) -> int:
@@ -245,6 +244,6 @@ FAMILY = Family(
     rank=10,
     example="symmetric:n=4",
     examples=("symmetric:n=3,halves=no", "symmetric:n=4,module=(3,1)"),
-    capabilities=(SizeGuard, ClosedForm, LevelJump, DiagramAlgebra, Encodings, FiniteSteps, CharacterData,),
+    capabilities=(SizeGuard, ClosedForm, LevelJump, DiagramAlgebra, Encodings, FiniteSteps, CharacterData),
 )
 

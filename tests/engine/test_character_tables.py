@@ -8,7 +8,7 @@ from engine.class_functions import mckay_matrix, validate
 from engine.diagram import Diagram
 from engine.partitions import contains, parse_partition, partitions_of
 from engine.specs import parse_spec
-from engine.mckay import step_matrices
+from engine.capabilities import FiniteSteps
 
 
 def test_s4_table_from_a_textbook():
@@ -68,10 +68,10 @@ def test_permutation_module_mckay_equals_restrict_then_induce(n):
             below = sum(1 for nu in partitions_of(n - 1) if contains(lam, nu) and contains(mu, nu))
             assert ours[i][j] == below
     # and the symmetric family's own whole step (halves=no) agrees
-    step = step_matrices(parse_spec(f"symmetric:n={n},halves=no"))[0]
-    for i, row in enumerate(step["matrix"]):
+    step = parse_spec(f"symmetric:n={n},halves=no").capability(FiniteSteps).whole_step()
+    for i, row in enumerate(step.matrix):
         for j, m in enumerate(row):
-            a, b = t.names.index(step["rows"][i]), t.names.index(step["columns"][j])
+            a, b = t.names.index(step.row_labels[i]), t.names.index(step.column_labels[j])
             assert ours[a][b] == m
 
 

@@ -12,13 +12,7 @@ import argparse
 import csv
 import json
 import sys
-from pathlib import Path
-from typing import TYPE_CHECKING, Any
-
-from engine.errors import UserError
-
-if TYPE_CHECKING:
-    from engine.class_functions import CharacterTable
+from typing import Any
 
 
 def add_commands(subparsers: argparse._SubParsersAction) -> None:
@@ -37,16 +31,13 @@ def add_commands(subparsers: argparse._SubParsersAction) -> None:
 
 # ----- mckay ------------------------------------------------------------------------------------
 def run_mckay(args: argparse.Namespace) -> int:
-    from engine.mckay import step_matrices
+    from engine.export.group_documents import mckay_document
     from engine.specs import parse_spec
 
     tower = parse_spec(args.spec)
-    steps = step_matrices(tower)
+    out = mckay_document(tower)
+    steps = out["steps"]
     if args.json:
-        out: dict[str, Any] = {"tower": tower.spec, "steps": steps}
-        if len(steps) == 2:  # the two half steps compose to one whole step: ⊗ V
-            a, b = steps[0]["matrix"], steps[1]["matrix"]
-            out["whole_step"] = [[sum(a[i][t] * b[t][j] for t in range(len(b))) for j in range(len(b[0]))] for i in range(len(a))]
         print(json.dumps(out))
     elif args.csv:
         writer = csv.writer(sys.stdout, lineterminator="\n")
@@ -76,65 +67,9 @@ def _print_matrix(step: dict[str, Any], title: str) -> None:
 
 
 # ----- check ------------------------------------------------------------------------------------
-def file_kind(path: str) -> str:
-    """``graph`` or ``characters``, by suffix and by the ``format`` key of a TOML file."""
-    from engine.files.character_table import FORMAT as TABLE_FORMAT
-    from engine.files.tensor_graph import FORMAT as GRAPH_FORMAT, NETWORKX_SUFFIXES
-    from engine.files.toml_checks import load_toml
-
-    suffix = Path(path).suffix.lower()
-    if suffix in NETWORKX_SUFFIXES:
-        return "graph"
-    if suffix != ".toml":
-        raise UserError(f"{Path(path).name}: unknown file type {suffix!r} (accepted: .toml, .graphml, .gml)")
-    fmt = load_toml(path).get("format")
-    kinds = {GRAPH_FORMAT: "graph", TABLE_FORMAT: "characters"}
-    if fmt not in kinds:
-        raise UserError(f"{Path(path).name}: key 'format' is {fmt!r} (accepted: {GRAPH_FORMAT!r}, {TABLE_FORMAT!r})")
-    return kinds[fmt]
-
-
-def check_report(path: str) -> dict[str, Any]:
-    """What a valid file holds, as plain data; UserError naming the first problem otherwise."""
-    from engine.mckay import step_matrices
-
-    if file_kind(path) == "graph":
-        from engine.files.tensor_graph import read_tensor_graph
-        from engine.matrix_tower import MatrixTower
-
-        pattern, root, title = read_tensor_graph(path)
-        tower = MatrixTower(f"graph:file={path}", "graph", pattern, root)
-        return {"file": path, "kind": "tensor graph", "title": title, "root": root,
-                "half_levels": len(pattern) == 2, "steps": step_matrices(tower)}
-    from engine.class_functions import decompose, mckay_matrix
-    from engine.families.characters import character_tower
-    from engine.files.character_table import read_character_file
-
-    data = read_character_file(path)
-    t = data.table
-    tower = character_tower(f"characters:file={path}", "characters", t, data.module, subgroup=data.subgroup)
-    module = decompose(t, data.module, "V")
-    report: dict[str, Any] = {
-        "file": path, "kind": "character table", "group": t.name, "order": t.order,
-        "classes": len(t.classes), "irreducibles": _irreducibles(t),
-        "module_dimension": int(sum(m * d for m, d in zip(module, t.degrees()))),
-        "module": {n: m for n, m in zip(t.names, module) if m},
-        "mckay": [list(row) for row in mckay_matrix(t, data.module)],  # the whole step ⊗ V
-        "steps": step_matrices(tower),
-    }
-    if data.subgroup is not None:
-        s = data.subgroup.table
-        report["subgroup"] = {"group": s.name, "order": s.order, "index": t.order // s.order,
-                              "irreducibles": _irreducibles(s)}
-    return report
-
-
-def _irreducibles(table: CharacterTable) -> list[dict[str, Any]]:
-    """Name and dimension of each irreducible character of a table."""
-    return [{"name": n, "dimension": d} for n, d in zip(table.names, table.degrees())]
-
-
 def run_check(args: argparse.Namespace) -> int:
+    from engine.export.group_documents import check_report
+
     report = check_report(args.file)
     if args.json:
         print(json.dumps(report))
