@@ -13,7 +13,7 @@ from typing import Any
 from engine.encodings import Encoding
 from engine.levels import level_to_json
 from engine.paths import Path, PathIndex, check_rank
-from engine.tower import Node
+from engine.tower import Node, Tower
 
 
 def crosses_multiple_edge(index: PathIndex, path: Path) -> bool:
@@ -54,3 +54,30 @@ def paths_document(
         document["encoding"] = encoding.name
     document["paths"] = listed
     return document
+
+
+def rank_document(index: PathIndex, level: int, node: Node, path: Path, rank: int) -> dict[str, Any]:
+    """``rank``: the path's rank among the paths to ``node`` and its labels."""
+    tower = index.diagram.tower
+    return {
+        "level": level_to_json(tower.level_of(level)),
+        "label": tower.format(node),
+        "total": index.total(level, node),
+        "rank": rank,
+        "labels": [tower.format(n) for n in path.nodes],
+    }
+
+
+def tableaux_document(tower: Tower, level: int, node: Node, total: int, start: int, items: list) -> dict[str, Any]:
+    """``tableaux``: set-partition tableaux by rank, each with its blocks, inner shape and cells."""
+    return {
+        "level": level_to_json(tower.level_of(level)),
+        "label": tower.format(node),
+        "total": total,
+        "start": start,
+        "tableaux": [
+            {"rank": r, "blocks": [list(b) for b in t.blocks], "inner": list(t.inner),
+             "cells": [list(row) for row in t.cells], "aside": None if t.aside is None else list(t.aside)}
+            for r, t in items
+        ],
+    }

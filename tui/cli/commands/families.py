@@ -18,10 +18,9 @@ def run(args: argparse.Namespace) -> int:
 
     found = families()
     if args.json:
-        print_json(
-            [{"family": f.name, "summary": f.summary, "keys": f.keys, "required": list(f.required), "example": f.example}
-             for f in found.values()]
-        )
+        from engine.export.family_documents import families_document
+
+        print_json(families_document(found.values()))
         return 0
     from tui.cli.tables import print_families
 

@@ -94,7 +94,7 @@ def run_paths(args: argparse.Namespace) -> int:
 
 
 def run_rank(args: argparse.Namespace) -> int:
-    from engine.levels import level_to_json
+    from engine.export.path_documents import rank_document
 
     paths, index, node, encoding = _prepare(args)
     tower = paths.diagram.tower
@@ -102,15 +102,7 @@ def run_rank(args: argparse.Namespace) -> int:
     paths.check(path, index, node)
     rank = paths.rank(path)
     if args.json:
-        print_json(
-            {
-                "level": level_to_json(tower.level_of(index)),
-                "label": tower.format(node),
-                "total": paths.total(index, node),
-                "rank": rank,
-                "labels": [tower.format(n) for n in path.nodes],
-            }
-        )
+        print_json(rank_document(paths, index, node, path, rank))
     else:
         sys.stdout.write(f"{rank}\n")
     return 0

@@ -30,7 +30,7 @@ def add_commands(sub: argparse._SubParsersAction) -> None:
 def run(args: argparse.Namespace) -> int:
     from engine.diagram import Diagram
     from engine.errors import UserError
-    from engine.levels import level_to_json
+    from engine.export.path_documents import tableaux_document
     from engine.paths import parse_rank
     from engine.capabilities import Encodings
     from engine.specs import parse_spec
@@ -52,19 +52,7 @@ def run(args: argparse.Namespace) -> int:
     ranks = range(start, min(total, start + args.count))
     items = [(r, basis.unrank(r)) for r in ranks]
     if args.json:
-        print_json(
-            {
-                "level": level_to_json(tower.level_of(index)),
-                "label": tower.format(node),
-                "total": total,
-                "start": start,
-                "tableaux": [
-                    {"rank": r, "blocks": [list(b) for b in t.blocks], "inner": list(t.inner),
-                     "cells": [list(row) for row in t.cells], "aside": None if t.aside is None else list(t.aside)}
-                    for r, t in items
-                ],
-            }
-        )
+        print_json(tableaux_document(tower, index, node, total, start, items))
         return 0
     sys.stdout.write(f"{total} set-partition tableaux of {tower.format(node)} at level {args.level} of {tower.spec}\n")
     for r, t in items:
