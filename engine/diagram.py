@@ -131,7 +131,7 @@ class Diagram:
             raise TooLarge(
                 f"building {self.tower.spec} to level {format_level(self.tower.level_of(index))} "
                 f"would walk about {estimate:.2e} edges, over the limit of {self.edge_limit:.0e}; "
-                "ask for a lower level, or for one node (the node command uses a closed form where "
+                "ask for a lower level, or for single nodes (answered by a closed form or a jump where "
                 "the family has one)"
             )
 

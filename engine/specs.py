@@ -65,7 +65,7 @@ def split_spec(spec: str) -> tuple[str, dict[str, str]]:
     """``family:k=v,k=v`` → (family, {k: v}); commas inside parentheses stay in the value."""
     text = spec.strip()
     if not text:
-        raise SpecError("empty tower spec (write FAMILY or FAMILY:key=value,...; see `towerscope families`)")
+        raise SpecError(f"empty tower spec (write FAMILY or FAMILY:key=value,...; families: {', '.join(families())})")
     name, _, rest = text.partition(":")
     name = name.strip()
     params: dict[str, str] = {}

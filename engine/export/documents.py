@@ -75,7 +75,7 @@ def require_node(diagram: Diagram, index: int, node: Node, text: str) -> int:
         tower = diagram.tower
         raise LabelError(
             f"{text!r} is not reached at level {format_level(tower.level_of(index))} of {tower.spec} "
-            "(no path from the root; `towerscope levels` lists the nodes of a level)"
+            "(no path from the root reaches it there)"
         )
     return m
 

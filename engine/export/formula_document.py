@@ -37,7 +37,7 @@ def closed_form_of(tower: Tower, text: str) -> SymmetricClosedForm:
         raise missing(tower, ClosedForm, "formula")
     if closed.expression is None:
         raise UserError(f"formula: {tower.spec} has no formula in k to print "
-                        "(each node lives on one level; `towerscope node` gives its multiplicity)")
+                        "(each node lives on one level only)")
     index, node = node_of_some_kind(tower, text)
     form = closed.expression(index, node)
     assert isinstance(form, SymmetricClosedForm)
