@@ -22,7 +22,7 @@ def test_cancel_stops_a_build_and_leaves_the_diagram_usable():
     with pytest.raises(Cancelled):
         d.ensure(60, progress=progress, cancel=token)
     assert 30 < d.built < 60 and seen
-    # resuming without the token finishes and agrees with a fresh build (common practice: same numbers)
+    # self-consistency (engine against itself): resuming without the token agrees with a fresh build
     d.ensure(44)
     assert d.level(44) == Diagram(parse_spec("symmetric:n=40")).level(44)
 
@@ -106,8 +106,8 @@ def test_negative_levels_are_refused_not_read_from_the_end():
 
 def test_reading_while_a_worker_builds_gives_the_same_numbers():
     # the explorer reads built levels (children, parents, sums) on the UI thread while a worker
-    # builds deeper ones; the result must equal a build on one thread (common practice: the
-    # numbers do not depend on who asks first)
+    # builds deeper ones; the result must equal a build on one thread (self-consistency, engine
+    # against itself: the numbers do not depend on who asks first)
     spec = "symmetric:n=12"
     shared = Diagram(parse_spec(spec))
     shared.ensure(6)
