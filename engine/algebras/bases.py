@@ -158,6 +158,11 @@ def _iter_rgs(n: int, start: int) -> Iterator[list[int]]:
             top[j] = m
 
 
+def set_partitions(n: int) -> Iterator[Blocks]:
+    """Every set partition of 0..n−1 (blocks canonical), in restricted-growth-string order."""
+    return _iter_partitions(n)
+
+
 # ----- perfect matchings ------------------------------------------------------------------------
 _DOUBLE = [double_factorial_odd(t) for t in range(64)]
 
