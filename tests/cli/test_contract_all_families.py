@@ -377,3 +377,53 @@ def test_the_real_command_prints_one_line(bad_files, argv):
         pytest.skip("needs a /proc file system (a folder nobody can create files in)")
     done = run_process(*(a.format(d=bad_files) for a in argv))
     _one_line_exit_2(done.returncode, done.stdout, done.stderr)
+
+
+@pytest.mark.parametrize("spec,top,halves,dim_v", TOWERS, ids=IDS)
+def test_levels_from_and_at(documents, capsys, spec, top, halves, dim_v):
+    # --from A --to K prints levels A..K only and --at L the single level L, each level exactly as
+    # in the full listing (the contract); first_unfaithful is the tower's, whatever is printed
+    full = levels_doc(documents, capsys, spec, top)
+    levels = full["levels"]
+    middle = levels[len(levels) // 2]["level"]
+    part = run_json(capsys, "levels", spec, "--from", str(middle), "--to", top)
+    assert part["levels"] == [lv for lv in levels if Fraction(str(lv["level"])) >= Fraction(str(middle))]
+    assert part["first_unfaithful"] == full["first_unfaithful"]
+    one = run_json(capsys, "levels", spec, "--at", str(middle))
+    assert one["levels"] == [lv for lv in levels if lv["level"] == middle]
+    assert one["first_unfaithful"] == full["first_unfaithful"]
+
+
+# first_unfaithful against the published statements (the contract: computed for the tower, not the
+# printed levels): P_k(N) acts faithfully iff 2k ≤ N (Jones 1994, Martin 1994), CS_k iff k ≤ N and
+# B_k(N) iff k ≤ N (Brauer 1937; Goodman and Wallach 2009, ch. 10), B_k(−2M) iff k ≤ M, TL_k(−2)
+# always (it is the whole centralizer of SL_2), the walled Brauer algebra iff r + s ≤ N
+FIRST_UNFAITHFUL = [
+    ("symmetric:n=4", 2.5), ("symmetric:n=5", 3), ("symmetric:n=5,halves=no", 3),
+    ("general-linear:n=3", 4), ("orthogonal:n=3", 4), ("symplectic:n=4", 3), ("symplectic:n=6", 4),
+    ("symplectic:n=2", None), ("mixed:n=2,word=vvdd", 3), ("mixed:n=3,word=vvd", None),
+    ("su2:kind=icosahedral", None),
+]
+
+
+@pytest.mark.parametrize("spec,expected", FIRST_UNFAITHFUL)
+def test_first_unfaithful_is_for_the_whole_tower(capsys, spec, expected):
+    doc = run_json(capsys, "levels", spec, "--to", "1")
+    assert doc["first_unfaithful"] == expected
+    if expected is not None:  # and the printed levels agree where they reach it
+        deep = run_json(capsys, "levels", spec, "--to", str(expected))
+        assert [lv["algebra"]["faithful"] for lv in deep["levels"]][-1] is False
+        assert all(lv["algebra"]["faithful"] for lv in deep["levels"][:-1])
+
+
+def test_deep_at_without_building(capsys):
+    # level 10^6 of the icosahedral tower by a jump (matrix powers); Σ m·dim = 2^(10^6)
+    # (dim V^{⊗k}, common practice), the node count is the five nodes of even distance from the
+    # trivial one in the affine E8 graph (McKay 1980, from memory)
+    import sys
+
+    sys.set_int_max_str_digits(0)
+    doc = run_json(capsys, "levels", "su2:kind=icosahedral", "--at", "1000000")
+    (level,) = doc["levels"]
+    assert level["level"] == 1000000 and len(level["nodes"]) == 5
+    assert level["sums"]["weighted"] == 2**1000000
