@@ -101,3 +101,14 @@ def test_refusals():
     singletons = tuple((v,) for v in range(16))
     with pytest.raises(TooLarge):
         to_orbit({singletons: 1}, level(8))
+
+
+def test_orbit_square_in_p1_symbolic():
+    # hand computation: x_{1|1'} acts as J − I, and (J − I)^2 = (N − 1)·I + (N − 2)·(J − I), i.e.
+    # x_{1|1'}^2 = (x − 1)·x_{11'} + (x − 2)·x_{1|1'}
+    from engine.algebras.elements import Poly
+
+    lev = level(1)
+    apart = parse_diagram("{1},{1'}", 1)
+    square = multiply_orbit({apart: 1}, {apart: 1}, lev, symbolic=True)
+    assert square == {parse_diagram("{1,1'}", 1): Poly((-1, 1)), apart: Poly((-2, 1))}

@@ -1,6 +1,7 @@
 """CLI subcommands: each module has ``add_commands(subparsers)`` and imports heavy libraries only
 inside its handlers."""
 
+from tui.cli.commands import diagrams, multiply
 from tui.cli.commands import app_commands, export, families, formula, groups, levels, node, paths, tableaux
 
-COMMAND_MODULES = [levels, node, formula, paths, tableaux, families, groups, export, app_commands]
+COMMAND_MODULES = [levels, node, formula, paths, tableaux, families, groups, export, diagrams, multiply, app_commands]
