@@ -37,7 +37,19 @@ from typing import Iterator
 from engine.algebras.diagrams import Blocks, canonical, format_diagram, in_basis
 from engine.capabilities import AlgebraLevel
 from engine.combinatorics import bell, catalan, double_factorial_odd
-from engine.errors import UserError
+from engine.errors import TooLarge, UserError
+
+#: the most vertices per row listed by rank (the rank tables hold (2r)^2 integers of up to
+#: Bell(2r) size; 100 vertices keep them to a few megabytes)
+MAX_VERTICES = 100
+
+
+def check_size(vertices: int, name: str = "") -> None:
+    """TooLarge past ``MAX_VERTICES`` vertices per row."""
+    if vertices > MAX_VERTICES:
+        what = f"{name}: " if name else ""
+        raise TooLarge(f"{what}diagrams with {vertices} vertices per row; bases are listed and ranked up to "
+                       f"{MAX_VERTICES} vertices per row")
 
 
 def count(level: AlgebraLevel) -> int:
@@ -55,6 +67,7 @@ def count(level: AlgebraLevel) -> int:
 
 
 def _check_rank(level: AlgebraLevel, i: int) -> None:
+    check_size(level.vertices, level.name)
     total = count(level)
     if not 0 <= i < total:
         raise UserError(f"no diagram of rank {i} in {level.name}: ranks run from 0 to {total - 1}")
@@ -305,6 +318,7 @@ def rank(level: AlgebraLevel, d: Blocks, check: bool = True) -> int:
     """The rank of a basis diagram; UserError when it is not a diagram of the level's basis
     (``check=False``: the caller knows it is, e.g. a product of basis diagrams)."""
     r, kind = level.vertices, level.kind
+    check_size(r, level.name)
     if check and not in_basis(d, level):
         raise UserError(f"{format_diagram(d, r)[:200]} is not a basis diagram of {level.name}")
     if kind == "partition":

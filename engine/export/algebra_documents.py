@@ -12,10 +12,11 @@ partition algebra: the factors were read and the product is written in it).
 from __future__ import annotations
 
 from itertools import islice
+from math import ceil
 from typing import TYPE_CHECKING, Any
 
+from engine.algebras.bases import MAX_VERTICES, check_size, iter_basis
 from engine.algebras.bases import count as basis_count
-from engine.algebras.bases import iter_basis
 from engine.algebras.diagrams import Blocks, format_diagram
 from engine.algebras.elements import Element, element_json, parse_element
 from engine.capabilities import AlgebraLevel, DiagramAlgebra, require
@@ -29,8 +30,13 @@ BASES = ("diagram", "orbit")
 
 
 def algebra_at(tower: "Tower", index: int) -> AlgebraLevel:
-    """The diagram algebra of the level; the one-line UserError of ``missing`` without one."""
-    return require(tower, DiagramAlgebra).at(index)
+    """The diagram algebra of the level; the one-line UserError of ``missing`` without one, and
+    TooLarge (before the algebra is named) past ``MAX_VERTICES`` vertices per row."""
+    found = require(tower, DiagramAlgebra)
+    level_value = tower.level_of(index)
+    if level_value > MAX_VERTICES:
+        check_size(ceil(level_value), f"level {level_value}")
+    return found.at(index)
 
 
 def diagram_page(level: AlgebraLevel, start: int, count: int) -> list[tuple[int, Blocks]]:

@@ -110,3 +110,16 @@ def test_exit_status_in_a_process():
     assert result.returncode == 2 and "Traceback" not in result.stderr
     result = run_process("diagrams", "symmetric:n=2", "--level", "1", "--json")
     assert result.returncode == 0 and '"total": 2' in result.stdout
+
+
+def test_deep_level_refused_up_front(run_cli):
+    # common practice: a refusal names the size that made it refuse
+    status, out, err = run_cli("diagrams", "orthogonal:n=3", "--level", "100000")
+    assert status == 2 and "100000 vertices per row" in err
+
+
+def test_large_rank_at_a_deep_level(run_json):
+    # OEIS A001147: B_60 has 119!! diagrams; the last rank (hand computation: 1 with 60', 2 with 59', ...) unranks without listing
+    doc = run_json("diagrams", "orthogonal:n=2", "--level", "60", "--start", "-1")
+    assert doc["diagrams"][0]["rank"] == doc["total"] - 1
+    assert doc["diagrams"][0]["diagram"].startswith("{1,60'},{2,59'}")
