@@ -92,3 +92,20 @@ def test_tikz_structure():
     assert text.count(r"\node") == 6
     # edges: block {1,2'} one line; block {2,3,1'} one arc and one line
     assert text.count(r"\draw") == 3
+
+
+@pytest.mark.parametrize("lev", [level("partition", 6), level("partition", 7, half=True), level("brauer", 9),
+                                 level("walled-brauer", 8, word="vdvvddvd"), level("temperley-lieb", 10)],
+                         ids=lambda lv: lv.kind + lv.word + ("h" if lv.half else ""))
+def test_drawing_random_larger(lev):
+    # common practice (a diagram is its set partition), on random ranks of larger levels
+    import random
+
+    from engine.algebras.bases import count, unrank
+
+    rng = random.Random(lev.vertices)
+    for _ in range(150):
+        d = unrank(lev, rng.randrange(count(lev)))
+        lines = draw(d, lev.vertices)
+        assert all(len(line) <= 80 for line in lines)
+        assert components_in_picture(lines, lev.vertices) == {frozenset(block) for block in d}
