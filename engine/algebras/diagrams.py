@@ -101,45 +101,50 @@ def compose(d1: Blocks, d2: Blocks, r: int) -> tuple[Blocks, int]:
     Union–find on the blocks of d1 (numbers 0..m1−1) and of d2 (m1..): middle point j joins the
     d1 block of bottom vertex j' with the d2 block of top vertex j.  Reading the top row of d1 and
     then the bottom row of d2 in order yields the blocks already canonical."""
-    m1 = len(d1)
-    label = [0] * (2 * r)
-    for b, block in enumerate(d1):
+    r2 = 2 * r
+    label = [0] * (4 * r)  # d1's vertices at 0..2r−1, d2's at 2r..4r−1, valued by block number
+    b = 0
+    for block in d1:
         for v in block:
             label[v] = b
-    label2 = [0] * (2 * r)
-    for b, block in enumerate(d2, m1):
+        b += 1
+    for block in d2:
         for v in block:
-            label2[v] = b
-    parent = list(range(m1 + len(d2)))
+            label[r2 + v] = b
+        b += 1
+    parent = list(range(b))
     for j in range(r):
         a = label[r + j]
         while parent[a] != a:
             a = parent[a]
-        b = label2[j]
-        while parent[b] != b:
-            b = parent[b]
-        if a != b:
-            parent[a] = b
-    roots = parent[:]
-    for i in range(len(roots)):
-        a = i
-        while parent[a] != a:
-            a = parent[a]
-        roots[i] = a
+        c = label[r2 + j]
+        while parent[c] != c:
+            c = parent[c]
+        if a != c:
+            parent[a] = c
     groups: dict[int, list[int]] = {}
     for v in range(r):
-        root = roots[label[v]]
-        if root in groups:
-            groups[root].append(v)
+        a = label[v]
+        while parent[a] != a:
+            a = parent[a]
+        g = groups.get(a)
+        if g is None:
+            groups[a] = [v]
         else:
-            groups[root] = [v]
-    for v in range(r, 2 * r):
-        root = roots[label2[v]]
-        if root in groups:
-            groups[root].append(v)
+            g.append(v)
+    for v in range(r, r2):
+        a = label[r2 + v]
+        while parent[a] != a:
+            a = parent[a]
+        g = groups.get(a)
+        if g is None:
+            groups[a] = [v]
         else:
-            groups[root] = [v]
-    components = sum(1 for i, p in enumerate(parent) if p == i)
+            g.append(v)
+    components = 0
+    for i in range(b):
+        if parent[i] == i:
+            components += 1
     return tuple(map(tuple, groups.values())), components - len(groups)
 
 
