@@ -23,7 +23,7 @@ vertices per row).  The order of the ranks, per kind:
   lexicographic order of (σ(1), ..., σ(k)) (Lehmer codes).  Count k!.
 - **walled-brauer** (word w of r letters): swapping the top and bottom vertex of every position
   whose letter is d turns a walled Brauer diagram into a permutation diagram, a bijection onto
-  S_r (the usual "flip the dual strands" of Benkart et al., J. Algebra 1994); ranks are the ranks
+  S_r (the usual "flip the dual strands", as in the 1994 study of mixed tensor spaces, J. Algebra); ranks are the ranks
   of that permutation.  Count r! = (#v + #d)!.
 """
 

@@ -7,8 +7,8 @@ order (top vertices ascending, then bottom vertices ascending; blocks by their f
 order 1 < ... < k < 1' < ... < k'), so formatting needs no sorting.
 
 The product ``compose(d1, d2, r)`` puts d1 above d2 and glues d1's bottom row to d2's top row
-(Martin, *Potts models and related problems in statistical mechanics*, 1991; Halverson–Ram,
-"Partition algebras", European J. Combin. 2005, §1): union–find on the blocks of the two diagrams,
+(Martin, *Potts models and related problems in statistical mechanics*, 1991;
+Jones, "The Potts model and the symmetric group", 1994): union–find on the blocks of the two diagrams,
 joined through the r middle points; components that meet neither outer row are counted (each
 multiplies the product by the parameter).
 """
@@ -192,8 +192,8 @@ def in_basis(d: Blocks, level: "AlgebraLevel") -> bool:
     block); brauer: blocks of size 2; temperley-lieb: planar Brauer diagrams; symmetric-group: each
     block one top and one bottom vertex; walled-brauer: pairs, a vertical edge (top–bottom) joins
     vertices of one letter, a horizontal one (top–top, bottom–bottom) vertices of different letters
-    (Turaev 1989, Koike 1989; Benkart et al., "Tensor product representations of general linear
-    groups and their connections with Brauer algebras", J. Algebra 1994)."""
+    (Turaev 1989, Koike 1989; the 1994 study of tensor products of GL_n-modules with their duals,
+    J. Algebra)."""
     r = level.vertices
     if not is_diagram(d, r):
         return False

@@ -2,7 +2,7 @@
 
 For set-partition diagrams π, ρ of the same vertices write ρ ≥ π when ρ is coarser (every block of
 ρ is a union of blocks of π).  The orbit basis {x_π} is defined by d_π = Σ_{ρ ≥ π} x_ρ
-(Halverson–Ram, "Partition algebras", European J. Combin. 2005, §4: x_π acts on V^{⊗k} by the
+(a 2005 survey of partition algebras, European J. Combin., §4: x_π acts on V^{⊗k} by the
 indices whose pattern of equalities is exactly π), so by Möbius inversion on the lattice of set
 partitions x_π = Σ_{ρ ≥ π} μ(π, ρ) d_ρ with
 

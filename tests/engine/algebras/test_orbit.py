@@ -55,8 +55,8 @@ def test_roundtrip(lev):
 
 
 def _action(d, r: int, n: int, exact: bool) -> dict:
-    """The matrix of a diagram on (C^n)^{⊗r} written directly from the definitions (Halverson–Ram
-    2005, §3–4): entry (i, j) is 1 when the indices i_1..i_r, j_1..j_r are equal within every block
+    """The matrix of a diagram on (C^n)^{⊗r} written directly from the definitions (a 2005
+    survey of partition algebras, §3–4): entry (i, j) is 1 when the indices i_1..i_r, j_1..j_r are equal within every block
     of d (the diagram basis) or, for the orbit basis, equal exactly within the blocks."""
     out = {}
     for indices in product(range(n), repeat=2 * r):
@@ -79,7 +79,7 @@ def _element_action(e, r, n):
 
 @pytest.mark.parametrize("r,n", [(2, 2), (2, 3), (3, 2)])
 def test_orbit_elements_act_by_exact_patterns(r, n):
-    # Halverson–Ram 2005 (the definition of the orbit basis): x_π acts by the index patterns equal
+    # the definition of the orbit basis (a 2005 survey of partition algebras): x_π acts by the index patterns equal
     # exactly on π's blocks; here its diagram-basis expansion is checked against that matrix
     lev = level(r)
     for d in list(iter_basis(lev))[::7]:

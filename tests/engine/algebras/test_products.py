@@ -35,7 +35,7 @@ def test_temperley_lieb_relations():
 
 
 def test_brauer_relations():
-    # Brauer algebra relations (from memory; e.g. Halverson–Ram, "Partition algebras", 2005, §1):
+    # Brauer algebra relations (from memory; Brauer, Ann. of Math. 1937):
     # e^2 = x e, s e = e s = e, s^2 = 1
     lev = level("brauer", 2, parameter=3)
     ee = e("{1,2},{1',2'}", lev)
@@ -46,7 +46,8 @@ def test_brauer_relations():
 
 
 def test_partition_relations():
-    # Halverson–Ram, "Partition algebras" (European J. Combin. 2005), Theorem 1.11 (from memory):
+    # the presentation of the partition algebra by generators (from memory; stated as a theorem in a
+    # 2005 survey of partition algebras, European J. Combin.):
     # p_i^2 = x p_i, p_{i+1/2}^2 = p_{i+1/2}, p_i p_{i+1/2} p_i = p_i, p_{i+1/2} p_i p_{i+1/2} = p_{i+1/2}
     lev = level("partition", 2, parameter=4)
     p1 = e("{1},{1'},{2,2'}", lev)
