@@ -1,0 +1,241 @@
+"""The action of a diagram algebra on V^{⊗k} (V = C^n), exact and sparse.
+
+A tensor index (i_1, ..., i_k) ∈ [0, n)^k is the integer Σ i_j n^{k−j} (the first factor most
+significant).  The matrix of a diagram has its rows indexed by the labels of the top vertices and its
+columns by the labels of the bottom vertices, so that with the contract's product (d1 above d2,
+d1's bottom glued to d2's top) action(d1·d2) = action(d1)·action(d2).
+
+- partition (P_k(n), S_n): the entry is 1 when the labels are constant on every block, 0 otherwise
+  (the classical action: Jones, "The Potts model and the symmetric group", 1994; Martin 1994; the
+  2005 survey of partition algebras in the European J. Combin., §3).
+- half partition (P_{k+1/2}(n), S_{n−1}): a diagram of k+1 vertices per row acts on V^{⊗(k+1)} as
+  above; its matrix is restricted to the indices whose last factor is the last basis vector of V
+  (top and bottom), which identifies that subspace with V^{⊗k}.  Since k+1 and (k+1)' share a
+  block, a diagram's entries vanish unless both last labels agree, so the glued middle vertex k+1
+  carries the same fixed label and the restriction is a homomorphism (the stabilizer S_{n−1} of the
+  last basis vector commutes with it).  The matrix is n^k × n^k.
+- brauer with the group orthogonal (B_k(n), O(n)): pairs, the same δ rule (the standard symmetric
+  form δ_ij; Brauer, Ann. of Math. 1937).
+- brauer with the group symplectic (B_k(−n), Sp(n), n = 2m) and temperley-lieb (TL_k(−2),
+  planar Brauer diagrams, Sp(2) = SL_2): V carries the form ω(e_a, e_b) = J_ab with
+  J = [[0, I_m], [−I_m, 0]].  A bottom–bottom pair {i < j} contributes J(b_i, b_j) (the form), a
+  top–top pair {i < j} contributes T(a_i, a_j) with T = J^{-1} = −J (the invariant tensor), a
+  vertical pair δ(a_i, b_j); the product is multiplied by the sign ε(d) = sign(α)·sign(β), where α
+  lists the top vertices as the top pairs (each ascending, pairs in any order) followed by the top
+  ends of the vertical pairs ascending, and β lists the bottom pairs followed by the bottom ends of
+  the vertical pairs in the same order.  So a permutation σ acts by sign(σ) times the permutation
+  of the factors and a loop has the value Σ J_ab T_ab = −n: the sign-twisted Brauer action of
+  B_k(−n) (Brauer 1937; Goodman–Wallach, *Symmetry, Representations, and Invariants*, 2009, §10.1);
+  the tests prove the homomorphism property and the commutation with explicit symplectic matrices.
+- symmetric-group (CS_k, GL_n): permutations of the tensor factors (Schur–Weyl duality).
+- walled-brauer (GL_n on a word of V's and V*'s): the i-th factor is V for the letter v and V*
+  for d (dual basis); vertical edges are δ, a top horizontal edge is the invariant Σ e_a ⊗ e^a, a
+  bottom one the contraction V ⊗ V* → C; all entries 0/1 (Koike 1989; Turaev 1989).
+"""
+
+from __future__ import annotations
+
+from itertools import product as labelings
+from typing import Iterator
+
+from engine.algebras.diagrams import Blocks
+from engine.capabilities import AlgebraLevel
+from engine.errors import TooLarge, UserError
+
+#: the most nonzero entries one action matrix (or one stack of them) may hold
+ENTRY_LIMIT = 6_000_000
+
+Sparse = dict[int, dict[int, int]]
+
+
+def space_dimension(level: AlgebraLevel) -> int:
+    """The dimension of the tensor space the level's algebra acts on: n^k (n^k at a half level k+1/2)."""
+    factors = level.vertices - 1 if level.half else level.vertices
+    return level.n ** factors
+
+
+def entry_count(d: Blocks, level: AlgebraLevel) -> int:
+    """The number of nonzero entries of the diagram's matrix (before the symplectic signs)."""
+    n, r = level.n, level.vertices
+    free = len(d) - (1 if level.half and r else 0)
+    if _signed(level):
+        return n ** free  # a pair's second label is determined by the first (J has one entry per row)
+    return n ** free
+
+
+def _signed(level: AlgebraLevel) -> bool:
+    return level.group == "symplectic"
+
+
+def guard(total_entries: int, what: str = "the action") -> None:
+    """TooLarge, with the estimate, past ``ENTRY_LIMIT`` nonzero entries."""
+    if total_entries > ENTRY_LIMIT:
+        raise TooLarge(f"{what} would hold about {total_entries:,} nonzero matrix entries "
+                       f"(the limit is {ENTRY_LIMIT:,}); take a smaller level or n")
+
+
+def _permutation_sign(seq: list[int]) -> int:
+    seen = [False] * len(seq)
+    sign = 1
+    for i in range(len(seq)):
+        if not seen[i]:
+            j, length = i, 0
+            while not seen[j]:
+                seen[j] = True
+                j = seq[j]
+                length += 1
+            if length % 2 == 0:
+                sign = -sign
+    return sign
+
+
+def symplectic_sign(d: Blocks, r: int) -> int:
+    """ε(d) = sign(α)·sign(β) of the module docstring (a Brauer diagram with r vertices per row)."""
+    top_pairs = [b for b in d if b[1] < r]
+    bottom_pairs = [(b[0] - r, b[1] - r) for b in d if b[0] >= r]
+    verticals = sorted((b[0], b[1] - r) for b in d if b[0] < r <= b[1])
+    alpha = [v for pair in top_pairs for v in pair] + [t for t, _ in verticals]
+    beta = [v for pair in bottom_pairs for v in pair] + [b for _, b in verticals]
+    return _permutation_sign(alpha) * _permutation_sign(beta)
+
+
+def entries(d: Blocks, level: AlgebraLevel) -> Iterator[tuple[int, int, int]]:
+    """(row, column, value) for every nonzero entry of the diagram's matrix on V^{⊗k}."""
+    n, r = level.n, level.vertices
+    factors = r - 1 if level.half else r
+    weight = [n ** (factors - 1 - i) if i < factors else 0 for i in range(r)]
+    if _signed(level):
+        yield from _symplectic_entries(d, n, r, weight)
+        return
+    rows: list[int] = []
+    cols: list[int] = []
+    fixed_row = fixed_col = 0
+    for block in d:
+        wr = sum(weight[v] for v in block if v < r)
+        wc = sum(weight[v - r] for v in block if v >= r)
+        if level.half and block[-1] == 2 * r - 1:
+            continue  # the block of k+1 and (k+1)' carries the fixed last label (outside the index)
+        rows.append(wr)
+        cols.append(wc)
+    free = len(rows)
+    for labels in labelings(range(n), repeat=free):
+        row, col = fixed_row, fixed_col
+        for i in range(free):
+            a = labels[i]
+            row += a * rows[i]
+            col += a * cols[i]
+        yield row, col, 1
+
+
+def _symplectic_entries(d: Blocks, n: int, r: int, weight: list[int]) -> Iterator[tuple[int, int, int]]:
+    if n % 2:
+        raise UserError(f"the symplectic action needs an even n, got n={n}")
+    m = n // 2
+    sign = symplectic_sign(d, r)
+    # per pair: (weight of the first label in the row, in the column, of the partner label in the row,
+    # in the column, the sign kind): kind 0 vertical (partner = same label), 1 top pair (T = −J),
+    # 2 bottom pair (J)
+    pairs = []
+    for a, b in d:
+        if b < r:
+            pairs.append((weight[a], 0, weight[b], 0, -1))
+        elif a >= r:
+            pairs.append((0, weight[a - r], 0, weight[b - r], 1))
+        else:
+            pairs.append((weight[a], 0, 0, weight[b - r], 0))
+    for labels in labelings(range(n), repeat=len(pairs)):
+        row = col = 0
+        value = sign
+        for (w1r, w1c, w2r, w2c, kind), x in zip(pairs, labels):
+            if kind == 0:
+                y = x
+            elif x < m:  # J(x, x+m) = 1
+                y = x + m
+                value *= kind
+            else:  # J(x, x−m) = −1
+                y = x - m
+                value *= -kind
+            row += x * w1r + y * w2r
+            col += x * w1c + y * w2c
+        yield row, col, value
+
+
+def diagram_matrix(d: Blocks, level: AlgebraLevel) -> Sparse:
+    """The diagram's matrix as rows: {row: {column: value}}."""
+    guard(entry_count(d, level))
+    out: Sparse = {}
+    for row, col, value in entries(d, level):
+        out.setdefault(row, {})[col] = value
+    return out
+
+
+def element_matrix(element: dict[Blocks, int], level: AlgebraLevel) -> Sparse:
+    """The matrix of an integer combination of diagrams (zero entries dropped)."""
+    guard(sum(entry_count(d, level) for d in element))
+    out: Sparse = {}
+    for d, c in element.items():
+        for row, col, value in entries(d, level):
+            line = out.setdefault(row, {})
+            total = line.get(col, 0) + c * value
+            if total:
+                line[col] = total
+            else:
+                del line[col]
+                if not line:
+                    del out[row]
+    return out
+
+
+def acts_as_zero(element: dict[Blocks, int], level: AlgebraLevel) -> bool:
+    """Whether the element's matrix on V^{⊗k} is zero (computed entry by entry, exactly)."""
+    return not element_matrix(element, level)
+
+
+def multiply_sparse(a: Sparse, b: Sparse) -> Sparse:
+    """The product of two sparse matrices (exact integers)."""
+    out: Sparse = {}
+    for i, row in a.items():
+        acc: dict[int, int] = {}
+        for k, x in row.items():
+            other = b.get(k)
+            if other:
+                for j, y in other.items():
+                    acc[j] = acc.get(j, 0) + x * y
+        acc = {j: v for j, v in acc.items() if v}
+        if acc:
+            out[i] = acc
+    return out
+
+
+def index_of(labels: tuple[int, ...], n: int) -> int:
+    """The integer of a tensor index (i_1, ..., i_k), 0-based labels."""
+    value = 0
+    for a in labels:
+        value = value * n + a
+    return value
+
+
+def labels_of(index: int, n: int, factors: int) -> tuple[int, ...]:
+    out = []
+    for _ in range(factors):
+        index, a = divmod(index, n)
+        out.append(a)
+    return tuple(reversed(out))
+
+
+def image_of_tensor(element: dict[Blocks, int], level: AlgebraLevel, labels: tuple[int, ...]) -> dict[tuple[int, ...], int]:
+    """The element applied to the basis tensor e_{i_1} ⊗ ... ⊗ e_{i_k} (0-based labels): a
+    combination {labels: coefficient} of basis tensors (the column of the matrix)."""
+    factors = level.vertices - 1 if level.half else level.vertices
+    if len(labels) != factors:
+        raise UserError(f"{level.name} acts on {factors} tensor factors; the tensor has {len(labels)}")
+    if any(not 0 <= a < level.n for a in labels):
+        raise UserError(f"tensor labels run from 1 to {level.n}")
+    col = index_of(labels, level.n)
+    guard(sum(entry_count(d, level) for d in element))
+    out: dict[int, int] = {}
+    for d, c in element.items():
+        for row, j, value in entries(d, level):
+            if j == col:
+                out[row] = out.get(row, 0) + c * value
+    return {labels_of(row, level.n, factors): v for row, v in sorted(out.items()) if v}
