@@ -56,11 +56,8 @@ def space_dimension(level: AlgebraLevel) -> int:
 
 def entry_count(d: Blocks, level: AlgebraLevel) -> int:
     """The number of nonzero entries of the diagram's matrix (before the symplectic signs)."""
-    n, r = level.n, level.vertices
-    free = len(d) - (1 if level.half and r else 0)
-    if _signed(level):
-        return n ** free  # a pair's second label is determined by the first (J has one entry per row)
-    return n ** free
+    free = len(d) - (1 if level.half and level.vertices else 0)
+    return level.n ** free  # symplectic: a pair's second label is fixed by the first (J is monomial)
 
 
 def _signed(level: AlgebraLevel) -> bool:
@@ -114,7 +111,9 @@ def entries(d: Blocks, level: AlgebraLevel) -> Iterator[tuple[int, int, int]]:
         wr = sum(weight[v] for v in block if v < r)
         wc = sum(weight[v - r] for v in block if v >= r)
         if level.half and block[-1] == 2 * r - 1:
-            continue  # the block of k+1 and (k+1)' carries the fixed last label (outside the index)
+            # the block of k+1 and (k+1)' carries the last label n−1 (the last factor is outside the index)
+            fixed_row, fixed_col = (n - 1) * wr, (n - 1) * wc
+            continue
         rows.append(wr)
         cols.append(wc)
     free = len(rows)
