@@ -35,7 +35,6 @@ d1's bottom glued to d2's top) action(d1·d2) = action(d1)·action(d2).
 
 from __future__ import annotations
 
-from itertools import product as labelings
 from typing import Iterator
 
 from engine.algebras.diagrams import Blocks
@@ -98,65 +97,57 @@ def symplectic_sign(d: Blocks, r: int) -> int:
 
 def entries(d: Blocks, level: AlgebraLevel) -> Iterator[tuple[int, int, int]]:
     """(row, column, value) for every nonzero entry of the diagram's matrix on V^{⊗k}."""
+    side = space_dimension(level)
+    keys, values = flat_entries(d, level, side)
+    if values is None:
+        for key in keys:
+            row, col = divmod(key, side)
+            yield row, col, 1
+    else:
+        for key, value in zip(keys, values):
+            row, col = divmod(key, side)
+            yield row, col, value
+
+
+def flat_entries(d: Blocks, level: AlgebraLevel, stride: int) -> tuple[list[int], list[int] | None]:
+    """The nonzero entries of the diagram's matrix as keys row·stride + column and their values
+    (None: every value is 1).  Built block by block, each block's labels added to all keys so far."""
     n, r = level.n, level.vertices
     factors = r - 1 if level.half else r
     weight = [n ** (factors - 1 - i) if i < factors else 0 for i in range(r)]
     if _signed(level):
-        yield from _symplectic_entries(d, n, r, weight)
-        return
-    rows: list[int] = []
-    cols: list[int] = []
-    fixed_row = fixed_col = 0
+        return _symplectic_entries(d, n, r, weight, stride)
+    keys = [0]
     for block in d:
-        wr = sum(weight[v] for v in block if v < r)
-        wc = sum(weight[v - r] for v in block if v >= r)
+        w = sum(weight[v] for v in block if v < r) * stride + sum(weight[v - r] for v in block if v >= r)
         if level.half and block[-1] == 2 * r - 1:
             # the block of k+1 and (k+1)' carries the last label n−1 (the last factor is outside the index)
-            fixed_row, fixed_col = (n - 1) * wr, (n - 1) * wc
+            keys = [key + (n - 1) * w for key in keys]
             continue
-        rows.append(wr)
-        cols.append(wc)
-    free = len(rows)
-    for labels in labelings(range(n), repeat=free):
-        row, col = fixed_row, fixed_col
-        for i in range(free):
-            a = labels[i]
-            row += a * rows[i]
-            col += a * cols[i]
-        yield row, col, 1
+        steps = [a * w for a in range(n)]
+        keys = [key + step for key in keys for step in steps]
+    return keys, None
 
 
-def _symplectic_entries(d: Blocks, n: int, r: int, weight: list[int]) -> Iterator[tuple[int, int, int]]:
+def _symplectic_entries(d: Blocks, n: int, r: int, weight: list[int], stride: int) -> tuple[list[int], list[int]]:
     if n % 2:
         raise UserError(f"the symplectic action needs an even n, got n={n}")
     m = n // 2
-    sign = symplectic_sign(d, r)
-    # per pair: (weight of the first label in the row, in the column, of the partner label in the row,
-    # in the column, the sign kind): kind 0 vertical (partner = same label), 1 top pair (T = −J),
-    # 2 bottom pair (J)
-    pairs = []
+    keys, values = [0], [symplectic_sign(d, r)]
     for a, b in d:
-        if b < r:
-            pairs.append((weight[a], 0, weight[b], 0, -1))
-        elif a >= r:
-            pairs.append((0, weight[a - r], 0, weight[b - r], 1))
+        # (key step, sign) per label x of the pair's first end; its partner is x (vertical) or x ± m
+        if b < r:  # top pair: T = −J, T(x, x+m) = −1, T(x, x−m) = +1
+            w1, w2 = weight[a] * stride, weight[b] * stride
+            steps = [(x * w1 + (x + m) * w2, -1) if x < m else (x * w1 + (x - m) * w2, 1) for x in range(n)]
+        elif a >= r:  # bottom pair: J(x, x+m) = 1, J(x, x−m) = −1
+            w1, w2 = weight[a - r], weight[b - r]
+            steps = [(x * w1 + (x + m) * w2, 1) if x < m else (x * w1 + (x - m) * w2, -1) for x in range(n)]
         else:
-            pairs.append((weight[a], 0, 0, weight[b - r], 0))
-    for labels in labelings(range(n), repeat=len(pairs)):
-        row = col = 0
-        value = sign
-        for (w1r, w1c, w2r, w2c, kind), x in zip(pairs, labels):
-            if kind == 0:
-                y = x
-            elif x < m:  # J(x, x+m) = 1
-                y = x + m
-                value *= kind
-            else:  # J(x, x−m) = −1
-                y = x - m
-                value *= -kind
-            row += x * w1r + y * w2r
-            col += x * w1c + y * w2c
-        yield row, col, value
+            w = weight[a] * stride + weight[b - r]
+            steps = [(x * w, 1) for x in range(n)]
+        keys = [key + step for key in keys for step, _ in steps]
+        values = [value * sign for value in values for _, sign in steps]
+    return keys, values
 
 
 def diagram_matrix(d: Blocks, level: AlgebraLevel) -> Sparse:
