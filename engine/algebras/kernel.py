@@ -19,7 +19,7 @@ reduced row echelon form of its transpose (pivot columns: diagrams whose actions
 chosen greedily in rank order; each other diagram d gives d − Σ c_r r); the coefficients are
 reconstructed as rationals, scaled to a primitive integer vector and checked exactly (the element's
 matrix on V^{⊗k} is computed and must be zero).  The elements for the first non-pivot diagrams are
-independent (each has its own non-pivot diagram with coefficient ±1 and no other non-pivot one).
+independent (each has its own non-pivot diagram with a nonzero coefficient and no other non-pivot one).
 """
 
 from __future__ import annotations
@@ -90,11 +90,13 @@ def build_stack(level: AlgebraLevel, progress: Progress | None = None, cancel=No
     return Stack(total, sorted(unique))
 
 
-def _cells(stack: Stack, width: int | None, seed: int, across: int | None = None) -> tuple[int, int, dict[int, int]]:
+def _cells(stack: Stack, width: int | None, seed: int, across: int | None = None,
+           prefix: int | None = None) -> tuple[int, int, dict[int, int]]:
     """(rows, columns, cells) of the transposed system: one row per (sketched) column of the stack,
     one column per diagram — or, with ``across``, per random combination of diagrams (a row
-    sketch of the stack, for the rank alone: it keeps rank ≤ the true rank)."""
-    d = stack.diagrams
+    sketch of the stack, for the rank alone: it keeps rank ≤ the true rank); with ``prefix``, only
+    the diagrams of rank below it."""
+    d = stack.diagrams if prefix is None else prefix
     rng = random.Random(seed)
     if across is None:
         targets = [((i, 1),) for i in range(d)]
@@ -109,6 +111,8 @@ def _cells(stack: Stack, width: int | None, seed: int, across: int | None = None
             [(rng.randrange(width) * cols, rng.randrange(1, 1 << 30)) for _ in range(2)]
         for base, w in spots:
             for i, v in column:
+                if i >= d:
+                    break
                 for t, u in targets[i]:
                     key = base + t
                     cells[key] = cells.get(key, 0) + w * u * v
@@ -193,13 +197,33 @@ def kernel_elements(level: AlgebraLevel, upper: int, how_many: int = 20, progres
     p = PRIMES[0]
     stack = report.stack
     width = None if len(stack.columns) <= upper + 16 else 2 * upper + 16
-    for seed in (1, 2, 0):
-        rows, _, cells = _cells(stack, width if seed else None, seed)
-        reduced, rk = _matrix(rows, d, cells, p).rref()
-        if rk == report.rank:
+    # the greedy pivots among the first m diagrams, and the expressions of the other diagrams among
+    # them in terms of earlier pivots, are those of the whole echelon form: grow m until it holds
+    # enough non-pivot diagrams
+    for sketch in ((width, 1), (None, 0)) if width is not None else ((None, 0),):
+        found = _first_elements(level, stack, d, wanted, report.rank, sketch, p)
+        if found is not None:
+            return KernelReport(dimension, found, report)
+    raise UserError(f"{level.name}: kernel elements could not be reconstructed from their residues modulo {p}")
+
+
+def _first_elements(level: AlgebraLevel, stack: Stack, d: int, wanted: int, rank: int,
+                    sketch: tuple[int | None, int], p: int) -> list[dict[Blocks, int]] | None:
+    """The kernel elements of the first ``wanted`` non-pivot diagrams, or None when one fails its
+    exact check (a sketch that lost rank on a prefix, or coefficients too large)."""
+    width, seed = sketch
+    # the greedy pivots among the first m diagrams, and the expressions of the other diagrams among
+    # them in terms of earlier pivots, are those of the whole echelon form: grow m until it holds
+    # enough non-pivot diagrams
+    m = min(d, 4 * wanted + 64)
+    while True:
+        rows, _, cells = _cells(stack, width, seed, prefix=m)
+        reduced, rk = _matrix(rows, m, cells, p).rref()
+        if m == d and rk != rank:
+            return None
+        if m - rk >= wanted or m == d:
             break
-    else:
-        raise UserError(f"{level.name}: the kernel could not be computed modulo {p}")
+        m = min(d, 2 * m + (wanted - (m - rk)))
     pivots: list[int] = []
     j = 0
     for i in range(rk):
@@ -208,16 +232,16 @@ def kernel_elements(level: AlgebraLevel, upper: int, how_many: int = 20, progres
         pivots.append(j)
         j += 1
     pivot_set = set(pivots)
-    free = [f for f in range(d) if f not in pivot_set][:wanted]
+    free = [f for f in range(m) if f not in pivot_set][:wanted]
     out = []
     for f in free:
         residues = [(pivots[i], (-int(reduced[i, f])) % p) for i in range(rk)]
         residues = [(c, v) for c, v in residues if v]
         element = _reconstruct(level, f, residues, p)
         if element is None:
-            raise UserError(f"{level.name}: a kernel element's coefficients are too large to reconstruct")
+            return None
         out.append(element)
-    return KernelReport(dimension, out, report)
+    return out
 
 
 def _reconstruct(level: AlgebraLevel, f: int, residues: list[tuple[int, int]], p: int) -> dict[Blocks, int] | None:
