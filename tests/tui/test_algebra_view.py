@@ -1,0 +1,74 @@
+"""The algebra view (key a) driven with Pilot: the diagrams of P_3(3) by rank and drawn, a product,
+the rank of the action computed beside Σm², the kernel, and the cell modules against the tower.
+
+Outside values: P_k(N) has Bell(2k) diagrams (OEIS A000110: Bell(6) = 203); the centralizer of S_3
+on (C^3)^{⊗3} has dimension Σ_{j≤3} S(6, j) = 1 + 31 + 90 = 122 (Stirling numbers of the second
+kind, sympy), so the kernel has dimension 203 − 122 = 81; e_1 = {1,2},{1',2'} satisfies
+e_1·e_1 = N·e_1 (the loop value; from memory, the defining relations of the partition algebra)."""
+
+from __future__ import annotations
+
+from sympy.functions.combinatorial.numbers import bell, stirling
+
+from tui.explorer.screens.algebra import AlgebraView
+
+from .conftest import app_on, settle
+
+
+def text(app, widget_id: str) -> str:  # noqa: ANN001
+    return str(app.screen.query_one(widget_id).render())
+
+
+async def go_to_level(pilot, level: str) -> None:  # noqa: ANN001
+    await pilot.press("g")
+    await pilot.press(*level, "enter")
+    await settle(pilot)
+
+
+async def test_the_algebra_view_of_p3_at_3() -> None:
+    app = app_on("symmetric:n=3", search_faithful=False)
+    async with app.run_test(size=(80, 24)) as pilot:
+        await settle(pilot)
+        await go_to_level(pilot, "3")
+        await pilot.press("a")
+        await settle(pilot)
+        assert isinstance(app.screen, AlgebraView)
+        summary = text(app, "#algebra-summary")
+        assert f"{int(bell(6))} basis diagrams" in summary and "parameter x = 3" in summary
+        squares = sum(int(stirling(6, j)) for j in range(1, 4))
+        assert f"= {squares}" in summary and f"kernel of dimension {203 - squares}" in summary
+        assert "diagram 0 of 0..202" in text(app, "#algebra-diagram")
+        await pilot.press("down", "down")
+        assert "diagram 2 of" in text(app, "#algebra-diagram")
+        # e_1 · e_1 = 3·e_1
+        await pilot.press("g")
+        await pilot.press(*"{1,2},{1',2'},{3,3'}", "enter")
+        await pilot.press("1", "2")
+        product = text(app, "#algebra-product")
+        assert "= 3*{1,2},{3,3'},{1',2'}" in product
+        # the rank, by linear algebra, equals Σm²
+        await pilot.press("r")
+        await settle(pilot)
+        assert f"computed by exact linear algebra): {squares} = Σm² ✓" in text(app, "#algebra-summary")
+        # the kernel: its dimension
+        await pilot.press("k")
+        await settle(pilot)
+        assert f"dimension {203 - squares}" in text(app, "#algebra-kernel")
+        # the cell modules: ranks at N agree with the tower
+        await pilot.press("c")
+        await settle(pilot)
+        cells = text(app, "#algebra-cells")
+        assert "not semisimple at x = 0, 1, 2, 3, 4" in cells  # P_3(x): x in {0, ..., 2k−2} (from memory)
+        assert "agree with the tower's multiplicities on every node" in cells
+        await pilot.press("escape")
+        await settle(pilot)
+        assert not isinstance(app.screen, AlgebraView)
+
+
+async def test_a_family_without_an_algebra_says_so() -> None:
+    app = app_on("su2:kind=icosahedral", search_faithful=False)
+    async with app.run_test(size=(80, 24)) as pilot:
+        await settle(pilot)
+        await pilot.press("a")
+        await settle(pilot)
+        assert not isinstance(app.screen, AlgebraView)
