@@ -19,6 +19,7 @@ from math import factorial
 from engine.class_functions import CharacterTable
 from engine.cyclotomic import Cyc
 from engine.errors import UserError
+from engine.numbers_in import is_digits, quote, read_whole
 from engine.partitions import Partition, format_partition, partitions_of
 
 #: S_n tables are dense p(n) × p(n); beyond this their McKay matrices take too long
@@ -138,6 +139,6 @@ def builtin_table(text: str) -> CharacterTable:
     """``symmetric(N)``, ``cyclic(N)`` or ``dihedral(N)`` (D_N of order 2N)."""
     makers = {"symmetric": symmetric_table, "cyclic": cyclic_table, "dihedral": dihedral_table}
     name, _, rest = text.strip().partition("(")
-    if name not in makers or not rest.endswith(")") or not rest[:-1].strip().isdigit():
-        raise UserError(f"{text!r} is not a built-in table (write symmetric(N), cyclic(N) or dihedral(N))")
-    return makers[name](int(rest[:-1]))
+    if name not in makers or not rest.endswith(")") or not is_digits(rest[:-1].strip()):
+        raise UserError(f"{quote(text)} is not a built-in table (write symmetric(N), cyclic(N) or dihedral(N))")
+    return makers[name](read_whole(rest[:-1], f"the N of {name}(N)", max_digits=18))

@@ -7,16 +7,21 @@ the same level; on output an integer level is an int and a half level a decimal
 
 from __future__ import annotations
 
+import math
 import re
 from fractions import Fraction
 
 from engine.errors import UserError
+from engine.numbers_in import NumberError, describe, explain_non_digits, quote, read_whole
 
 Level = Fraction
 
-_DECIMAL = re.compile(r"^\d+(\.\d+)?$")
-_RATIO = re.compile(r"^(\d+)\s*/\s*(\d+)$")
-_MIXED = re.compile(r"^(\d+)\s*\+\s*(\d+)\s*/\s*(\d+)$")
+_DECIMAL = re.compile(r"^([0-9]+)(?:\.([0-9]+))?$", re.ASCII)
+_RATIO = re.compile(r"^([0-9]+)\s*/\s*([0-9]+)$", re.ASCII)
+_MIXED = re.compile(r"^([0-9]+)\s*\+\s*([0-9]+)\s*/\s*([0-9]+)$", re.ASCII)
+#: digits a level may have (no tower can be walked, jumped or even estimated much beyond 10^30)
+MAX_LEVEL_DIGITS = 30
+_ACCEPTED = "write a non-negative number such as 3, 2.5, 5/2 or 2+1/2"
 
 
 class LevelError(UserError):
@@ -32,26 +37,49 @@ def parse_level(text: str | int | float | Fraction) -> Fraction:
     elif isinstance(text, int):
         value = Fraction(text)
     elif isinstance(text, float):
+        if not math.isfinite(text):
+            raise LevelError(f"{text!r} is not a level ({_ACCEPTED})")
         value = Fraction(text)
+    elif isinstance(text, str):
+        value = _parse_text(text)
     else:
-        s = text.strip()
-        if _DECIMAL.match(s):
-            value = Fraction(s)
-        elif m := _RATIO.match(s):
-            if int(m.group(2)) == 0:
-                raise LevelError(f"level {text!r} divides by zero")
-            value = Fraction(int(m.group(1)), int(m.group(2)))
-        elif m := _MIXED.match(s):
-            if int(m.group(3)) == 0:
-                raise LevelError(f"level {text!r} divides by zero")
-            value = int(m.group(1)) + Fraction(int(m.group(2)), int(m.group(3)))
-        else:
-            raise LevelError(
-                f"{text!r} is not a level (write a non-negative number such as 3, 2.5, 5/2 or 2+1/2)"
-            )
+        raise LevelError(f"{type(text).__name__} is not a level ({_ACCEPTED})")
     if value < 0:
-        raise LevelError(f"level {text!r} is negative")
+        raise LevelError(f"a level is never negative, got {quote(text) if isinstance(text, str) else describe(math.floor(value))} ({_ACCEPTED})")
+    if value >= _TOO_DEEP:
+        raise LevelError(f"level {describe(int(value))} is too deep (levels have at most {MAX_LEVEL_DIGITS} digits)")
     return value
+
+
+_TOO_DEEP = 10**MAX_LEVEL_DIGITS
+
+
+def _parse_text(text: str) -> Fraction:
+    """The string forms, read by ``engine.numbers_in`` (ASCII digits, lengths checked first)."""
+    s = text.strip()
+    if len(s) > 3 * MAX_LEVEL_DIGITS + 10:
+        raise LevelError(f"{quote(s)} is not a level: too long (levels have at most {MAX_LEVEL_DIGITS} digits)")
+
+    def whole(digits: str) -> int:
+        try:
+            return read_whole(digits, "a level", max_digits=MAX_LEVEL_DIGITS)
+        except NumberError as exc:
+            raise LevelError(str(exc)) from None
+
+    if m := _DECIMAL.match(s):
+        value = Fraction(whole(m.group(1)))
+        if m.group(2):
+            value += Fraction(whole(m.group(2)), 10 ** len(m.group(2)))
+        return value
+    if m := _RATIO.match(s):
+        if whole(m.group(2)) == 0:
+            raise LevelError(f"level {quote(text)} divides by zero")
+        return Fraction(whole(m.group(1)), whole(m.group(2)))
+    if m := _MIXED.match(s):
+        if whole(m.group(3)) == 0:
+            raise LevelError(f"level {quote(text)} divides by zero")
+        return whole(m.group(1)) + Fraction(whole(m.group(2)), whole(m.group(3)))
+    raise LevelError(f"{quote(text)} is not a level ({_ACCEPTED}; {explain_non_digits(s)})")
 
 
 def level_to_json(level: Fraction) -> int | float:

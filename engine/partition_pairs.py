@@ -8,7 +8,8 @@ from __future__ import annotations
 
 import re
 
-from engine.partitions import Partition, PartitionError, format_partition, parse_partition
+from engine.numbers_in import quote
+from engine.partitions import MAX_PARTITION_TEXT, Partition, PartitionError, format_partition, parse_partition
 
 PartitionPair = tuple[Partition, Partition]
 
@@ -24,7 +25,9 @@ def format_pair(pair: PartitionPair) -> str:
 
 def parse_pair(text: str) -> PartitionPair:
     """Read a pair of partitions; PartitionError with the accepted forms otherwise."""
+    if len(text) > MAX_PARTITION_TEXT:
+        raise PartitionError(f"{quote(text)} is too long for a pair of partitions (at most {MAX_PARTITION_TEXT:,} characters)")
     found = _WITH_OUTER.match(text) or _WITHOUT_OUTER.match(text)
     if found is None:
-        raise PartitionError(f"{text!r} is not a pair of partitions (write e.g. ((2,1),(1)) or ((),(1)))")
+        raise PartitionError(f"{quote(text)} is not a pair of partitions (write e.g. ((2,1),(1)) or ((),(1)))")
     return parse_partition(found.group(1)), parse_partition(found.group(2))

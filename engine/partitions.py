@@ -20,6 +20,7 @@ from math import factorial
 from typing import Iterator
 
 from engine.errors import UserError
+from engine.numbers_in import explain_non_digits, is_digits, quote
 
 Partition = tuple[int, ...]
 
@@ -30,31 +31,42 @@ class PartitionError(UserError):
     """A string that does not denote a partition."""
 
 
+#: digits of one part (no tower reaches a partition with a part of 10^18 boxes)
+MAX_PART_DIGITS = 18
+#: characters of a partition's text (a partition of a usable size is far shorter)
+MAX_PARTITION_TEXT = 100_000
+
+
 def parse_partition(text: str) -> Partition:
-    """Read ``(3,1,1)``, ``3,1,1``, ``3 1 1`` or ``()``; raise PartitionError otherwise."""
+    """Read ``(3,1,1)``, ``3,1,1``, ``3 1 1`` or ``()``; raise PartitionError otherwise.  Parts are
+    ASCII digits (``engine.numbers_in``), their length checked before conversion."""
+    if len(text) > MAX_PARTITION_TEXT:
+        raise PartitionError(f"{quote(text)} is too long for a partition (at most {MAX_PARTITION_TEXT:,} characters)")
     body = text.strip()
     if body.startswith("(") and body.endswith(")"):
         body = body[1:-1].strip()
     elif "(" in body or ")" in body:
-        raise PartitionError(f"unbalanced parentheses in partition {text!r}")
+        raise PartitionError(f"unbalanced parentheses in partition {quote(text)}")
     if not body:
         return ()
     parts: list[int] = []
     for piece in _SEPARATORS.split(body):
         if not piece:
             continue
-        if not piece.isdigit():
+        if not is_digits(piece):
             raise PartitionError(
-                f"{text!r} is not a partition: {piece!r} is not a whole number "
-                "(write e.g. (3,1,1), 3,1,1 or 3 1 1)"
+                f"{quote(text)} is not a partition: {quote(piece)} is not a whole number "
+                f"({explain_non_digits(piece)}; write e.g. (3,1,1), 3,1,1 or 3 1 1)"
             )
+        if len(piece) > MAX_PART_DIGITS:
+            raise PartitionError(f"{quote(text)} is not a partition of a usable size: a part has {len(piece):,} digits")
         parts.append(int(piece))
     while parts and parts[-1] == 0:
         parts.pop()
     if any(p <= 0 for p in parts):
-        raise PartitionError(f"{text!r} is not a partition: zero part before a positive one")
+        raise PartitionError(f"{quote(text)} is not a partition: zero part before a positive one")
     if any(a < b for a, b in zip(parts, parts[1:])):
-        raise PartitionError(f"{text!r} is not a partition: parts must be weakly decreasing")
+        raise PartitionError(f"{quote(text)} is not a partition: parts must be weakly decreasing")
     return tuple(parts)
 
 

@@ -24,13 +24,13 @@ as quick as rank 0 once the levels are built.
 
 from __future__ import annotations
 
-import re
 from dataclasses import dataclass
 from typing import Iterator, Sequence
 
 from engine.diagram import Diagram
 from engine.errors import UserError
 from engine.levels import format_level
+from engine.numbers_in import NumberError, describe, quote, read_big
 from engine.tower import Node
 
 
@@ -195,35 +195,31 @@ def check_rank(rank: int, total: int, what: str) -> None:
     if total == 0:
         raise PathError(f"{what} has no path from the root")
     if not 0 <= rank < total:
-        raise PathError(f"rank {rank} is out of range: {what} has {total} paths, ranks 0..{total - 1}")
+        raise PathError(
+            f"rank {describe(rank)} is out of range: {what} has {describe(total)} paths, ranks 0..{describe(total - 1)}"
+        )
 
 
-_POWER = re.compile(r"^(?:(\d+)\s*\*\s*)?(\d+)\s*(?:\^|\*\*)\s*(\d+)$")
-_SCIENTIFIC = re.compile(r"^(\d+)[eE](\d+)$")
+#: digits a typed rank may have (converting text to an int costs about n² steps)
+MAX_RANK_DIGITS = 100_000
 
 
 def parse_rank(text: str, total: int | None = None) -> int:
     """Read a rank: ``1234``, ``1_000_000``, ``10^12``, ``3*10^12``, ``10**12``, ``1e12`` (exact).
-    A negative rank counts from the end (−1 is the last path) when ``total`` is given."""
+    A negative rank counts from the end (−1 is the last path) when ``total`` is given.  Read by
+    ``engine.numbers_in.read_big``: ASCII digits, powers bounded by their digits before computing."""
     body = text.strip().replace("_", "").replace(" ", "")
     negative = body.startswith("-")
     if negative:
         body = body[1:]
-    if body.isdigit():
-        value = int(body)
-    elif m := _POWER.match(body):
-        value = int(m.group(1) or 1) * int(m.group(2)) ** int(m.group(3))
-    elif m := _SCIENTIFIC.match(body):
-        value = int(m.group(1)) * 10 ** int(m.group(2))
-    else:
-        raise PathError(
-            f"{text!r} is not a rank (write a whole number such as 42, 1_000_000, 10^12, 3*10^12 or 1e12; "
-            "-1 for the last)"
-        )
+    try:
+        value = read_big(body, "a rank", max_digits=MAX_RANK_DIGITS)
+    except NumberError as exc:
+        raise PathError(f"{exc} (-1 for the last)") from None
     if negative:
         if total is None:
-            raise PathError(f"rank {text!r} is negative")
+            raise PathError(f"rank {quote(text)} is negative")
         value = total - value
         if value < 0:
-            raise PathError(f"rank {text!r} reaches before the first path (there are {total})")
+            raise PathError(f"rank {quote(text)} reaches before the first path (there are {describe(total)})")
     return value

@@ -13,6 +13,7 @@ from dataclasses import dataclass
 from typing import Callable
 
 from engine.errors import SpecError, UserError
+from engine.numbers_in import NumberError, read_whole
 from engine.text import split_outside_parentheses
 from engine.tower import Tower
 
@@ -103,6 +104,10 @@ def parse_spec(spec: str) -> Tower:
     return family.build(canonical, params)
 
 
+#: digits of a whole-number spec key (n=, m=, ...): no family is usable beyond this
+MAX_KEY_DIGITS = 18
+
+
 def int_param(family: str, params: dict[str, str], key: str, *, minimum: int = 0, default: int | None = None) -> int:
     """A whole-number value of a spec key, at least ``minimum``; a SpecError naming the key otherwise."""
     raw = params.get(key)
@@ -110,9 +115,10 @@ def int_param(family: str, params: dict[str, str], key: str, *, minimum: int = 0
         if default is None:
             raise SpecError(f"{family}: key {key!r} is required")
         return default
-    if not raw.isdigit():
-        raise SpecError(f"{family}: key {key!r} must be a whole number, got {raw!r}")
-    value = int(raw)
+    try:
+        value = read_whole(raw, f"{family}: key {key!r}", max_digits=MAX_KEY_DIGITS)
+    except NumberError as exc:
+        raise SpecError(str(exc)) from None
     if value < minimum:
         raise SpecError(f"{family}: key {key!r} must be at least {minimum}, got {value}")
     return value

@@ -22,7 +22,7 @@ from engine.paths import Path, PathError
 from engine.text import split_outside_parentheses
 from engine.tower import Tower
 
-_EDGE = re.compile(r"^(.*)#(\d+)$")
+_EDGE = re.compile(r"^(.*)#([0-9]{1,18})$", re.ASCII | re.DOTALL)
 
 
 def split_labels(text: str) -> list[str]:

@@ -24,6 +24,7 @@ from typing import Sequence
 
 from engine.encodings.base import Encoding
 from engine.encodings.drawing import draw_grid
+from engine.numbers_in import is_digits
 from engine.partitions import Partition
 from engine.paths import Path, PathError
 from engine.tower import Tower
@@ -125,7 +126,7 @@ class StandardTableau(Encoding):
         rows = []
         for piece in body.split("/"):
             entries = [e for e in re.split(r"[\s,]+", piece.strip()) if e]
-            if not entries or not all(e.isdigit() for e in entries):
+            if not entries or not all(is_digits(e) and len(e) <= 18 for e in entries):
                 raise PathError(f"{text!r} is not a tableau (write {self.syntax})")
             rows.append(tuple(int(e) for e in entries))
         return tuple(rows)
@@ -161,7 +162,7 @@ class UpDownTableau(Encoding):
         if body in _EMPTY:
             return ()
         tokens = re.findall(r"\S+", body.replace(",", " "))
-        if not all(re.fullmatch(r"[+-][1-9]\d*", t) for t in tokens):
+        if not all(re.fullmatch(r"[+-][1-9][0-9]{0,17}", t, re.ASCII) for t in tokens):
             raise PathError(f"{text!r} is not an up–down sequence (write {self.syntax})")
         return tuple(int(t) for t in tokens)
 

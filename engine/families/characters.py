@@ -16,6 +16,7 @@ from engine.capabilities import Capability, CharacterData, Encodings, FiniteStep
 from engine.class_functions import CharacterTable, Entry, decompose, mckay_matrix, sum_of_rows
 from engine.errors import SpecError
 from engine.matrix_tower import MatrixTower, NodeSet, Step
+from engine.numbers_in import is_digits, read_whole
 from engine.specs import Family, choice_param
 class CharacterTower(MatrixTower):
     """A matrix tower whose labels may have several spellings (``normalize`` maps them to one)."""
@@ -86,8 +87,8 @@ def module_from_names(table: CharacterTable, text: str, normalize: Callable[[str
         piece = raw.strip()
         times = 1
         head, star, tail = piece.partition("*")
-        if star and head.strip().isdigit():
-            times, piece = int(head), tail.strip()
+        if star and is_digits(head.strip()):
+            times, piece = read_whole(head, "a module's multiplicity", max_digits=18), tail.strip()
         name = piece
         if name not in table.names and normalize is not None:
             try:
@@ -162,7 +163,7 @@ def symmetric_module_tower(spec: str, n: int, module_text: str) -> CharacterTowe
 
     for piece in module_text.split("+"):
         head, star, tail = piece.partition("*")
-        term = tail if star and head.strip().isdigit() else piece
+        term = tail if star and is_digits(head.strip()) else piece
         normalize(term)  # a clear message for a partition of the wrong size
     module = module_from_names(table, module_text, normalize)
     values = [parse_partition(name) for name in table.names]
