@@ -18,15 +18,29 @@ from __future__ import annotations
 
 import re
 from fractions import Fraction
+from math import gcd
 from typing import Any
 
-from engine.cyclotomic import Cyc, sqrt_rational
+from engine.cyclotomic import Cyc, sqrt_conductor, sqrt_rational
 from engine.errors import UserError
+from engine.numbers_in import explain_non_digits, quote
 
-_TOKEN = re.compile(r"\s*(?:(\d+)|([A-Za-z_]+)|(.))")
+_TOKEN = re.compile(r"\s*(?:([0-9]+)|([A-Za-z_]+)|(.))", re.ASCII | re.DOTALL)
+#: digits of one whole number in an entry
 _MAX_DIGITS = 40
-_MAX_ORDER = 10_000
+#: characters of one entry, and tokens in it (an entry of a character table is a few dozen)
+MAX_TEXT = 4_000
+MAX_TOKENS = 2_000
+#: nesting of parentheses, sqrt, unity and powers
+MAX_DEPTH = 40
+#: the largest n of the field Q(ζ_n) an entry or any step of its evaluation may need
+MAX_CONDUCTOR = 1_000
+#: whole-number exponents x^k
 _MAX_POWER = 10_000
+#: bits of the largest coefficient of any intermediate value (about 6,000 digits)
+MAX_COEFFICIENT_BITS = 20_000
+#: term products (weighted by coefficient size) an entry may spend while it is evaluated
+MAX_WORK = 3_000_000
 
 Tree = tuple[Any, ...]
 
@@ -41,6 +55,8 @@ _SYNTAX = "integers, fractions a/b, i, sqrt(q), unity(n) or unity(n,k), + - * / 
 class _Parser:
     def __init__(self, text: str) -> None:
         self.text = text
+        if len(text) > MAX_TEXT:
+            raise AlgebraicError(f"{quote(text)} is too long for a table entry (at most {MAX_TEXT:,} characters)")
         self.tokens: list[str] = []
         pos = 0
         stripped = text.rstrip()
@@ -50,10 +66,21 @@ class _Parser:
                 break
             self.tokens.append(m.group(1) or m.group(2) or m.group(3))
             pos = m.end()
+            if len(self.tokens) > MAX_TOKENS:
+                raise AlgebraicError(f"{quote(text)} is too long for a table entry (at most {MAX_TOKENS} symbols)")
         self.pos = 0
+        self.depth = 0
+
+    def enter(self) -> None:
+        self.depth += 1
+        if self.depth > MAX_DEPTH:
+            raise self.fail(f"it nests deeper than {MAX_DEPTH} levels")
+
+    def leave(self) -> None:
+        self.depth -= 1
 
     def fail(self, what: str) -> AlgebraicError:
-        return AlgebraicError(f"{self.text!r} is not an exact number: {what} (accepted: {_SYNTAX})")
+        return AlgebraicError(f"{quote(self.text)} is not an exact number: {what} (accepted: {_SYNTAX})")
 
     def peek(self) -> str | None:
         return self.tokens[self.pos] if self.pos < len(self.tokens) else None
@@ -90,15 +117,20 @@ class _Parser:
         return tree
 
     def unary(self) -> Tree:
-        if self.peek() == "-":
-            self.take()
-            return ("neg", self.unary())
-        if self.peek() == "+":
-            self.take()
-            return self.unary()
-        return self.power()
+        negative = False
+        while self.peek() in ("-", "+"):  # a loop, not recursion: any run of signs is cheap
+            negative ^= self.take() == "-"
+        tree = self.power()
+        return ("neg", tree) if negative else tree
 
     def power(self) -> Tree:
+        self.enter()
+        try:
+            return self._power()
+        finally:
+            self.leave()
+
+    def _power(self) -> Tree:
         base = self.atom()
         if self.peek() in ("^",):
             self.take()
@@ -114,7 +146,9 @@ class _Parser:
 
     def whole(self, what: str) -> int:
         tok = self.peek()
-        if tok is None or not tok.isdigit():
+        if tok is None or not tok.isdigit() or not tok.isascii():
+            if tok is not None and tok.isnumeric():
+                raise self.fail(f"expected {what}: {explain_non_digits(tok)}")
             raise self.fail(f"expected {what}, found {tok!r}" if tok else f"expected {what} at the end")
         self.take()
         if len(tok) > _MAX_DIGITS:
@@ -125,7 +159,7 @@ class _Parser:
         tok = self.peek()
         if tok is None:
             raise self.fail("it ends too early")
-        if tok.isdigit():
+        if tok.isdigit() and tok.isascii():
             return ("int", self.whole("a number"))
         if tok == "(":
             self.take()
@@ -154,9 +188,11 @@ class _Parser:
                     sign = -1
                 k = sign * self.whole("the power k of unity(n,k)")
             self.take(")")
-            if not 1 <= n <= _MAX_ORDER:
-                raise self.fail(f"unity(n) needs 1 ≤ n ≤ {_MAX_ORDER}, got {n}")
+            if not 1 <= n <= MAX_CONDUCTOR:
+                raise self.fail(f"unity(n) needs 1 ≤ n ≤ {MAX_CONDUCTOR}, got {n}")
             return ("unity", n, k)
+        if tok.isnumeric():
+            raise self.fail(explain_non_digits(tok))
         raise self.fail(f"unexpected {tok!r}")
 
 
@@ -166,44 +202,118 @@ def parse_tree(text: str) -> Tree:
 
 
 def to_cyclotomic(tree: Tree, text: str = "") -> Cyc:
-    """Evaluate a tree exactly in a cyclotomic field."""
-    kind = tree[0]
+    """Evaluate a tree exactly in a cyclotomic field, within the limits above: every step's field
+    Q(ζ_n) has n ≤ MAX_CONDUCTOR, every coefficient at most MAX_COEFFICIENT_BITS bits, and the
+    whole evaluation at most MAX_WORK weighted term products; each is refused before it is done."""
+    return _Evaluator(text).value(tree)
 
-    def rational_of(sub: Tree, what: str) -> Fraction:
-        value = to_cyclotomic(sub, text).rational()
-        if value is None:
-            raise AlgebraicError(f"{text!r}: {what} must be rational (accepted: {_SYNTAX})")
-        return value
 
-    if kind == "int":
-        return Cyc.of(tree[1])
-    if kind == "i":
-        return Cyc.unity(4)
-    if kind == "unity":
-        return Cyc.unity(tree[1], tree[2])
-    if kind == "sqrt":
-        argument = rational_of(tree[1], "the argument of sqrt")
-        try:
-            return sqrt_rational(argument)
-        except ValueError as exc:
-            raise AlgebraicError(f"{text!r}: {exc}") from exc
-    if kind == "neg":
-        return -to_cyclotomic(tree[1], text)
-    if kind in ("add", "sub", "mul"):
-        a, b = to_cyclotomic(tree[1], text), to_cyclotomic(tree[2], text)
-        return a + b if kind == "add" else a - b if kind == "sub" else a * b
-    if kind == "div":
-        divisor = rational_of(tree[2], "a divisor")
-        if divisor == 0:
-            raise AlgebraicError(f"{text!r}: division by zero")
-        return to_cyclotomic(tree[1], text) * (1 / divisor)
-    if kind == "pow":
-        base = to_cyclotomic(tree[1], text)
-        try:
-            return base ** tree[2]
-        except ValueError as exc:
-            raise AlgebraicError(f"{text!r}: a negative power needs a root of unity times a rational") from exc
-    raise AssertionError(kind)  # pragma: no cover
+def _lcm(a: int, b: int) -> int:
+    return a * b // gcd(a, b)
+
+
+def _coefficient_bits(value: Cyc) -> int:
+    return max((c.numerator.bit_length() + c.denominator.bit_length() for c in value.terms.values()), default=0)
+
+
+class _Evaluator:
+    def __init__(self, text: str) -> None:
+        self.text = text
+        self.work = 0
+
+    def fail(self, what: str) -> AlgebraicError:
+        return AlgebraicError(f"{quote(self.text)}: {what}")
+
+    def field(self, n: int) -> None:
+        if n > MAX_CONDUCTOR:
+            raise self.fail(
+                f"needs the field of {n:,}th roots of unity, beyond the {MAX_CONDUCTOR:,} accepted"
+            )
+
+    def spend(self, terms: int, bits: int) -> None:
+        if bits > MAX_COEFFICIENT_BITS:
+            raise self.fail(
+                f"a coefficient would have about {bits:,} bits, more than the {MAX_COEFFICIENT_BITS:,} accepted"
+            )
+        self.work += terms * (1 + bits // 256)
+        if self.work > MAX_WORK:
+            raise self.fail(f"it takes more than {MAX_WORK:,} steps to evaluate (the limit for a table entry)")
+
+    def add(self, a: Cyc, b: Cyc) -> Cyc:
+        self.field(_lcm(a.n, b.n))
+        self.spend(len(a.terms) + len(b.terms), max(_coefficient_bits(a), _coefficient_bits(b)) + 1)
+        return a + b
+
+    def mul(self, a: Cyc, b: Cyc) -> Cyc:
+        self.field(_lcm(a.n, b.n))
+        ta, tb = len(a.terms), len(b.terms)
+        self.spend(ta * tb, _coefficient_bits(a) + _coefficient_bits(b) + min(ta, tb).bit_length())
+        return a * b
+
+    def power(self, base: Cyc, exponent: int) -> Cyc:
+        if exponent < 0:
+            try:
+                base = base.inverse_monomial()
+            except ValueError as exc:
+                raise self.fail("a negative power needs a root of unity times a rational") from exc
+            exponent = -exponent
+        growth = max((c.numerator.bit_length() + c.denominator.bit_length() - 2 for c in base.terms.values()), default=0)
+        growth += (len(base.terms) - 1).bit_length()
+        if exponent * growth > MAX_COEFFICIENT_BITS:
+            raise self.fail(
+                f"the power ^{exponent} would have coefficients of about {exponent * growth:,} bits, "
+                f"more than the {MAX_COEFFICIENT_BITS:,} accepted"
+            )
+        result = Cyc.of(1)
+        while exponent:
+            if exponent & 1:
+                result = self.mul(result, base)
+            exponent >>= 1
+            if exponent:
+                base = self.mul(base, base)
+        return result
+
+    def rational(self, sub: Tree, what: str) -> Fraction:
+        value = self.value(sub)
+        self.spend(len(value.terms) * max(1, len(value.terms)), _coefficient_bits(value))
+        found = value.rational()
+        if found is None:
+            raise AlgebraicError(f"{quote(self.text)}: {what} must be rational (accepted: {_SYNTAX})")
+        return found
+
+    def value(self, tree: Tree) -> Cyc:
+        kind = tree[0]
+        if kind == "int":
+            return Cyc.of(tree[1])
+        if kind == "i":
+            return Cyc.unity(4)
+        if kind == "unity":
+            self.field(tree[1])
+            return Cyc.unity(tree[1], tree[2])
+        if kind == "sqrt":
+            argument = self.rational(tree[1], "the argument of sqrt")
+            if abs(argument.numerator * argument.denominator) > 10**12:
+                raise self.fail("the square root of a number this large is not supported (|a·b| ≤ 10^12 for sqrt(a/b))")
+            self.field(sqrt_conductor(argument))
+            try:
+                return sqrt_rational(argument)
+            except ValueError as exc:
+                raise self.fail(str(exc)) from exc
+        if kind == "neg":
+            return -self.value(tree[1])
+        if kind in ("add", "sub"):
+            a, b = self.value(tree[1]), self.value(tree[2])
+            return self.add(a, b if kind == "add" else -b)
+        if kind == "mul":
+            return self.mul(self.value(tree[1]), self.value(tree[2]))
+        if kind == "div":
+            divisor = self.rational(tree[2], "a divisor")
+            if divisor == 0:
+                raise self.fail("division by zero")
+            return self.mul(self.value(tree[1]), Cyc.of(1 / divisor))
+        if kind == "pow":
+            return self.power(self.value(tree[1]), tree[2])
+        raise AssertionError(kind)  # pragma: no cover
 
 
 def to_sympy(tree: Tree):  # -> sympy.Expr
@@ -242,7 +352,7 @@ def parse_number(value: str | int) -> Cyc:
     if isinstance(value, int):
         return Cyc.of(value)
     if not isinstance(value, str):
-        raise AlgebraicError(f"{value!r} is not an exact number (write a whole number or a string of {_SYNTAX})")
+        raise AlgebraicError(f"{quote(repr(value))} is not an exact number (write a whole number or a string of {_SYNTAX})")
     return to_cyclotomic(parse_tree(value), value)
 
 

@@ -234,6 +234,25 @@ def _sqrt_prime(p: int) -> Cyc:
     return gauss if p % 4 == 1 else gauss * Cyc.unity(4, 3)
 
 
+def sqrt_conductor(q: Fraction) -> int:
+    """The n of the field Q(ζ_n) in which ``sqrt_rational`` writes √q (|ab| ≤ 10^12 for q = a/b):
+    the lcm over the primes p of the squarefree part of 8 (p = 2), p (p ≡ 1 mod 4) or 4p
+    (p ≡ 3 mod 4), and 4 when q < 0 (Ireland and Rosen, Prop. 6.3.2, as above)."""
+    if q == 0:
+        return 1
+    _, f = _squarefree_split(q.numerator * q.denominator)
+    n = 4 if f < 0 else 1
+    f, p = abs(f), 2
+    while f > 1:
+        if p * p > f:
+            p = f  # what is left is prime
+        if f % p == 0:
+            n = _lcm(n, 8 if p == 2 else p if p % 4 == 1 else 4 * p)
+            f //= p
+        p += 1
+    return n
+
+
 def sqrt_rational(q: Fraction) -> Cyc:
     """The principal square root of a rational (i·√|q| for q < 0), as a cyclotomic number."""
     if q == 0:

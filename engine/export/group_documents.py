@@ -47,7 +47,7 @@ def file_kind(path: str) -> str:
         raise UserError(f"{Path(path).name}: unknown file type {suffix!r} (accepted: .toml, .graphml, .gml)")
     fmt = load_toml(path).get("format")
     kinds = {GRAPH_FORMAT: "graph", TABLE_FORMAT: "characters"}
-    if fmt not in kinds:
+    if not isinstance(fmt, str) or fmt not in kinds:
         raise UserError(f"{Path(path).name}: key 'format' is {fmt!r} (accepted: {GRAPH_FORMAT!r}, {TABLE_FORMAT!r})")
     return kinds[fmt]
 

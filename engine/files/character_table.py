@@ -32,10 +32,12 @@ Every rule broken gives a message naming the key, row or class.
 from __future__ import annotations
 
 from dataclasses import dataclass
+from math import gcd
 from pathlib import Path
 from typing import Any
 
-from engine.algebraic import AlgebraicError, parse_number
+from engine.algebraic import MAX_CONDUCTOR, AlgebraicError, parse_number
+from engine.cyclotomic import Cyc
 from engine.class_functions import (
     CharacterTable,
     Entry,
@@ -81,6 +83,8 @@ def _read_table(data: dict[str, Any], where: str) -> CharacterTable:
     if order < 1:
         raise FileFormatError(f"{where}: key 'order' must be positive, got {order}")
     classes = names_list(data, "classes", where)
+    if len(classes) > MAX_CLASSES:
+        raise FileFormatError(f"{where}: {len(classes):,} classes, more than the {MAX_CLASSES} a table file may have")
     sizes = whole_numbers(need(data, "sizes", where, list, "a list of class sizes"), f"{where}: key 'sizes'", positive=True)
     if len(sizes) != len(classes):
         raise FileFormatError(f"{where}: {len(sizes)} sizes for {len(classes)} classes (key 'sizes')")
@@ -99,7 +103,38 @@ def _read_table(data: dict[str, Any], where: str) -> CharacterTable:
         values.append(_row(row, f"{where}: row {rname!r}", classes))
     if not names:
         raise FileFormatError(f"{where}: key 'irreducible' lists no characters")
+    _check_cost(values, classes, where)
     return CharacterTable(name, order, classes, sizes, tuple(names), tuple(values))
+
+
+#: classes of a table read from a file
+MAX_CLASSES = 300
+#: products of terms of entries the checks of a table may take (orthogonality of rows and columns)
+MAX_CHECK_WORK = 5_000_000
+
+
+def _check_cost(values: list[tuple[Entry, ...]], classes: tuple[str, ...], where: str) -> None:
+    """Refuse, before checking orthogonality, a table whose checks would multiply more than
+    MAX_CHECK_WORK pairs of terms, or whose entries together need a field Q(ζ_n) with n beyond
+    ``engine.algebraic.MAX_CONDUCTOR``."""
+    conductor = 1
+    work = 0
+    for c in range(len(classes)):
+        column = sum(len(v[c].terms) if isinstance(v[c], Cyc) else 1 for v in values)
+        work += column * column
+        for v in values:
+            if isinstance(v[c], Cyc):
+                conductor = conductor * v[c].n // gcd(conductor, v[c].n)
+    if conductor > MAX_CONDUCTOR:
+        raise FileFormatError(
+            f"{where}: the entries together need the field of {conductor:,}th roots of unity, "
+            f"beyond the {MAX_CONDUCTOR:,} accepted"
+        )
+    if work > MAX_CHECK_WORK:
+        raise FileFormatError(
+            f"{where}: checking this table would take about {work:,} products of terms, "
+            f"more than the {MAX_CHECK_WORK:,} accepted"
+        )
 
 
 def _row(table: dict[str, Any], where: str, classes: tuple[str, ...]) -> tuple[Entry, ...]:

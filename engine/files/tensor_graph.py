@@ -36,10 +36,24 @@ from typing import Any
 from engine.errors import UserError
 from engine.files.toml_checks import FileFormatError, check_header, check_keys, load_toml, names_list, need, whole_numbers
 from engine.matrix_tower import MatrixTower, NodeSet, Step
+from engine.numbers_in import quote
 
 FORMAT = "towerscope-tensor-graph"
 VERSIONS = (1,)
 NETWORKX_SUFFIXES = (".graphml", ".gml")
+#: nodes of one set: step matrices are held dense (2,000² entries), so larger graphs are refused
+#: before any matrix is allocated
+MAX_NODES = 2_000
+#: GraphML and GML files larger than this are refused before they are read
+MAX_GRAPH_BYTES = 16 * 1024 * 1024
+
+
+def _check_node_count(count: int, where: str) -> None:
+    if count > MAX_NODES:
+        raise FileFormatError(
+            f"{where}: {count:,} nodes, more than the {MAX_NODES:,} a tensor graph may have "
+            f"(its step matrix would hold {count * count:,} entries)"
+        )
 
 
 def read_toml_graph(path: str | Path) -> tuple[list[Step], str, str]:
@@ -59,6 +73,7 @@ def read_toml_graph(path: str | Path) -> tuple[list[Step], str, str]:
             raise FileFormatError(f"{label} must be a table with labels and dimensions")
         check_keys(body, label, {"labels", "dimensions"})
         labels = names_list(body, "labels", label)
+        _check_node_count(len(labels), label)
         dims = need(body, "dimensions", label, list, "a list of positive whole numbers")
         if len(dims) != len(labels):
             raise FileFormatError(f"{label}: {len(dims)} dimensions for {len(labels)} labels")
@@ -119,20 +134,39 @@ def _read_step(name: str, body: Any, sets: dict[str, NodeSet], where: str) -> St
 
 def read_networkx_graph(path: str | Path) -> tuple[list[Step], str, str]:
     """(one step, root, title) from GraphML or GML, validated like the TOML form."""
+    import warnings
+
     import networkx as nx
 
     p = Path(path)
     where = p.name
+    kind = p.suffix[1:].upper()
     try:
-        graph = nx.read_graphml(p) if p.suffix.lower() == ".graphml" else nx.read_gml(p, label="label")
-    except (OSError, nx.NetworkXError, ValueError, Exception) as exc:  # the readers raise many kinds
-        raise FileFormatError(f"cannot read {where} as {p.suffix[1:].upper()}: {exc}") from exc
+        if not p.is_file():
+            raise FileFormatError(f"cannot read {str(p)!r}: {'not a regular file' if p.exists() else 'no such file'}")
+        if p.stat().st_size > MAX_GRAPH_BYTES:
+            raise FileFormatError(f"{where}: too large ({p.stat().st_size:,} bytes; at most {MAX_GRAPH_BYTES:,})")
+    except OSError as exc:
+        raise FileFormatError(f"cannot read {str(p)!r}: {exc.strerror or exc}") from None
+    with warnings.catch_warnings(record=True) as caught:  # networkx warns on stderr; we say it in one line
+        warnings.simplefilter("always")
+        try:
+            graph = nx.read_graphml(p) if p.suffix.lower() == ".graphml" else nx.read_gml(p, label="label")
+        except RecursionError:
+            raise FileFormatError(f"cannot read {where} as {kind}: it nests too deeply") from None
+        except (OSError, nx.NetworkXError, ValueError, Exception) as exc:  # the readers raise many kinds
+            raise FileFormatError(f"cannot read {where} as {kind}: {quote(str(exc), 200)}") from None
+    untyped = " (its GraphML <key> has no attr.type: write attr.type=\"int\")" if any(
+        "No key type" in str(w.message) for w in caught) else ""
+    _check_node_count(graph.number_of_nodes(), where)
     labels = tuple(str(n) for n in graph.nodes)
     if not labels:
         raise FileFormatError(f"{where}: the graph has no nodes")
     dims = []
     for node, attrs in graph.nodes(data=True):
         d = attrs.get("dimension")
+        if isinstance(d, str) and untyped:
+            raise FileFormatError(f"{where}: node {quote(str(node))} has dimension {quote(d)} as text{untyped}")
         if isinstance(d, bool) or not isinstance(d, int) or d < 1:
             raise FileFormatError(f"{where}: node {str(node)!r} has dimension {d!r} (node attribute 'dimension' must be a positive whole number)")
         dims.append(d)
@@ -140,6 +174,8 @@ def read_networkx_graph(path: str | Path) -> tuple[list[Step], str, str]:
     matrix = [[0] * len(labels) for _ in labels]
     for a, b, attrs in graph.edges(data=True):
         count = attrs.get("count", 1)
+        if isinstance(count, str) and untyped:
+            raise FileFormatError(f"{where}: edge {quote(str(a))}–{quote(str(b))} has count {quote(count)} as text{untyped}")
         if isinstance(count, bool) or not isinstance(count, int) or count < 0:
             raise FileFormatError(f"{where}: edge {str(a)!r}–{str(b)!r} has count {count!r} (edge attribute 'count' must be a whole number ≥ 0)")
         i, j = index[str(a)], index[str(b)]

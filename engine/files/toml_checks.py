@@ -3,11 +3,20 @@ with messages that name the key and say what would be accepted."""
 
 from __future__ import annotations
 
+import re
 import tomllib
 from pathlib import Path
 from typing import Any
 
 from engine.errors import UserError
+
+#: our TOML files are tables of a few hundred rows: refuse larger ones before reading them
+MAX_BYTES = 16 * 1024 * 1024
+#: nesting of arrays and tables (a matrix is 2 deep, a file 4 or 5)
+MAX_DEPTH = 32
+#: digits of one number in a file (TOML integers are read by int(), n² steps for n digits)
+MAX_NUMBER_DIGITS = 1000
+_LONG_DIGITS = re.compile(r"[0-9_]{%d,}" % (MAX_NUMBER_DIGITS + 1), re.ASCII)
 
 
 class FileFormatError(UserError):
@@ -15,8 +24,14 @@ class FileFormatError(UserError):
 
 
 def load_toml(path: str | Path) -> dict[str, Any]:
+    """The TOML document of a file, refused in one line when it is too large, nests deeper than
+    MAX_DEPTH or holds a number of more than MAX_NUMBER_DIGITS digits."""
     p = Path(path)
     try:
+        if not p.is_file() and p.exists():
+            raise FileFormatError(f"cannot read {str(p)!r}: not a regular file")
+        if p.stat().st_size > MAX_BYTES:
+            raise FileFormatError(f"{p.name}: too large ({p.stat().st_size:,} bytes; at most {MAX_BYTES:,})")
         text = p.read_text(encoding="utf-8")
     except OSError as exc:
         raise FileFormatError(f"cannot read {str(p)!r}: {exc.strerror or exc}") from exc
@@ -24,10 +39,46 @@ def load_toml(path: str | Path) -> dict[str, Any]:
         raise FileFormatError(
             f"{p.name}: not a TOML file (byte {exc.start} is not UTF-8 text; TOML files are UTF-8)"
         ) from exc
+    return parse_toml(text, p.name)
+
+
+def parse_toml(text: str, where: str) -> dict[str, Any]:
+    """``tomllib.loads`` within the limits above (checked before and after parsing)."""
+    if "\x00" in text:
+        raise FileFormatError(f"{where}: not a TOML file (it holds a NUL byte)")
+    long = _LONG_DIGITS.search(text)
+    if long is not None:
+        raise FileFormatError(
+            f"{where}: a run of {len(long.group()):,} digits, more than the {MAX_NUMBER_DIGITS:,} "
+            "accepted for one number"
+        )
     try:
-        return tomllib.loads(text)
+        data = tomllib.loads(text)
     except tomllib.TOMLDecodeError as exc:
-        raise FileFormatError(f"{p.name}: not valid TOML ({exc})") from exc
+        raise FileFormatError(f"{where}: not valid TOML ({str(exc)[:200]})") from None
+    except RecursionError:
+        raise FileFormatError(f"{where}: nests arrays or tables deeper than {MAX_DEPTH} levels") from None
+    depth = nesting_depth(data)
+    if depth > MAX_DEPTH:
+        raise FileFormatError(f"{where}: nests arrays or tables {depth} levels deep (at most {MAX_DEPTH})")
+    return data
+
+
+def nesting_depth(value: Any) -> int:
+    """How deep lists and dicts nest in a parsed document (iterative: no recursion limit)."""
+    deepest = 0
+    stack: list[tuple[Any, int]] = [(value, 1)]
+    while stack:
+        item, depth = stack.pop()
+        if isinstance(item, dict):
+            children = item.values()
+        elif isinstance(item, list):
+            children = item
+        else:
+            continue
+        deepest = max(deepest, depth)
+        stack.extend((child, depth + 1) for child in children if isinstance(child, (dict, list)))
+    return deepest
 
 
 def check_header(data: dict[str, Any], where: str, fmt: str, versions: tuple[int, ...]) -> None:
