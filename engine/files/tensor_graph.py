@@ -34,6 +34,7 @@ from pathlib import Path
 from typing import Any
 
 from engine.errors import UserError
+from engine.files.atomic import write_text_atomic
 from engine.files.toml_checks import FileFormatError, check_header, check_keys, load_toml, names_list, need, whole_numbers
 from engine.matrix_tower import MatrixTower, NodeSet, Step
 from engine.numbers_in import quote
@@ -218,9 +219,9 @@ def write_networkx_graph(step: Step, root: str, path: str | Path) -> None:
                 graph.add_edge(step.source.labels[i], step.target.labels[j], count=m)
     p = Path(path)
     if p.suffix.lower() == ".graphml":
-        nx.write_graphml(graph, p)
+        write_text_atomic(p, "\n".join(nx.generate_graphml(graph)) + "\n")
     elif p.suffix.lower() == ".gml":
-        nx.write_gml(graph, p)
+        write_text_atomic(p, "\n".join(nx.generate_gml(graph)) + "\n")
     else:
         raise UserError(f"{p.name}: write GraphML (.graphml) or GML (.gml)")
 

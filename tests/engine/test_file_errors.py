@@ -1,10 +1,9 @@
 """Files that cannot be read or written give a UserError with one line, never a traceback."""
 
-import tempfile
-
 import pytest
 
 from engine.errors import UserError
+from engine.files import atomic
 from engine.files.atomic import write_text_atomic
 from engine.files.toml_checks import load_toml
 from engine.specs import parse_spec
@@ -23,11 +22,11 @@ def test_a_toml_path_that_is_not_utf8_is_a_user_error(tmp_path):
 
 
 def test_a_folder_that_refuses_the_temporary_file_is_a_user_error(tmp_path, monkeypatch):
-    # a read-only or virtual folder makes mkstemp fail (we run as root here, so simulate it)
+    # a read-only or virtual folder refuses the temporary file (we run as root here, so simulate it)
     def refuse(*args, **kwargs):
         raise PermissionError(13, "Permission denied")
 
-    monkeypatch.setattr(tempfile, "mkstemp", refuse)
+    monkeypatch.setattr(atomic, "_create_temporary", refuse)
     with pytest.raises(UserError, match="cannot write .*Permission denied"):
         write_text_atomic(tmp_path / "out.dot", "digraph {}\n")
     assert list(tmp_path.iterdir()) == []
