@@ -50,6 +50,12 @@ def main(argv: Sequence[str] | None = None) -> int:
     except UserError as exc:
         print(f"towerscope: {exc}", file=sys.stderr)
         return EXIT_USAGE
+    except MemoryError:
+        print("towerscope: out of memory: the request is too large for this machine (ask for fewer levels or paths)", file=sys.stderr)
+        return EXIT_USAGE
+    except RecursionError:
+        print("towerscope: the input nests too deeply to be read", file=sys.stderr)
+        return EXIT_USAGE
     except Cancelled:
         print("towerscope: cancelled", file=sys.stderr)
         return 130
