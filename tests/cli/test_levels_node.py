@@ -58,8 +58,10 @@ def test_ten_thousand_digit_multiplicity_prints_exactly(run_cli):
     assert status == 0, err
     value = json.loads(out)["multiplicity"]
     assert value == 2**33299 and len(str(value)) > 10_000
+    status, out, _ = run_cli("node", "symmetric:n=2", "--level", "33300", "--label", "(2)", "--exact")
+    assert str(2**33299) in out.split()  # every digit, on one line
     status, out, _ = run_cli("node", "symmetric:n=2", "--level", "33300", "--label", "(2)")
-    assert str(2**33299) in out.replace("\n", "")
+    assert "9.95005" in out and "(10,024 digits)" in out  # shortened by default, with its digit count
 
 
 def test_csv_rows(run_cli):

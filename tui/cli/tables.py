@@ -1,106 +1,102 @@
-"""Readable rich tables for the CLI (no mathematics: everything comes from the engine)."""
+"""The CLI's text tables (no mathematics: everything comes from the engine).  Laid out by
+``tui.cli.fit``: they fit the output width and never break a number."""
 
 from __future__ import annotations
 
+import sys
 from typing import Any, Sequence
 
 from engine.diagram import Diagram
 from engine.levels import format_level
-from tui.cli.support import console
+from engine.numbers_in import digit_count
+from tui.cli.fit import Column, Table, digits_note, exact_number, output_width, short_number
 
 
 def _level_text(value: int | float) -> str:
     return str(value) if isinstance(value, int) else f"{value:g}"
 
 
-def print_levels(diagram: Diagram, upto: int, nodes: bool = True, start: int = 0) -> None:
-    from rich.table import Table
+def _out(text: str) -> None:
+    sys.stdout.write(text)
 
-    out = console()
+
+def print_levels(diagram: Diagram, upto: int, nodes: bool = True, start: int = 0, exact: bool = False) -> None:
     tower = diagram.tower
+    width = output_width()
     levels = list(diagram.levels_between(start, upto))
     if nodes:
         for index, level in levels:
             kind = tower.level_kind(index)
             title = f"level {format_level(tower.level_of(index))}" + (f"  ({kind})" if kind else "")
-            table = Table(title=title, title_justify="left", show_edge=False, pad_edge=False)
-            table.add_column("node")
-            table.add_column("multiplicity", justify="right", overflow="fold")
-            table.add_column("dimension", justify="right", overflow="fold")
+            table = Table([Column("node", key=True), Column("multiplicity", "right"), Column("dimension", "right")],
+                          title=title)
             for node in tower.sort_nodes(level, index) if index > diagram.built else diagram.nodes(index):
-                table.add_row(tower.format(node), str(level[node]), str(tower.dimension(index, node)))
-            out.print(table)
-            out.print()
-    table = Table(title=f"{tower.spec}: level sums", title_justify="left", show_edge=False, pad_edge=False)
-    table.add_column("level", justify="right", overflow="fold")
-    table.add_column("nodes", justify="right", overflow="fold")
-    table.add_column("Σm", justify="right", overflow="fold")
-    table.add_column("Σm² (centralizer)", justify="right", overflow="fold")
-    table.add_column("Σm·dim", justify="right", overflow="fold")
-    table.add_column("= dim V^⊗k")
+                table.add_row(tower.format(node), level[node], tower.dimension(index, node))
+            _out(table.render(width, exact) + "\n")
     generic = diagram.algebra(0) is not None
+    columns = [Column("level", "right", key=True), Column("nodes", "right"), Column("Σm", "right"),
+               Column("Σm² = dim centralizer", "right"), Column("Σm·dim", "right"), Column("=\u00a0dim V^⊗k")]
     if generic:
-        table.add_column("diagram algebra")
-        table.add_column("its dimension", justify="right", overflow="fold")
-        table.add_column("faithful")
+        columns += [Column("diagram algebra"), Column("its dimension", "right"), Column("faithful")]
+    table = Table(columns, title=f"{tower.spec}: level sums")
     for index, level in levels:
         sums = diagram.sums_of(index, level)
-        row = [
+        row: list[Any] = [
             format_level(tower.level_of(index)),
-            str(len(level)),
-            str(sums.multiplicities),
-            str(sums.squares),
-            str(sums.weighted),
-            "yes" if sums.consistent else f"NO ({sums.tensor_dimension})",
+            len(level),
+            sums.multiplicities,
+            sums.squares,
+            sums.weighted,
+            "yes" if sums.consistent else f"NO ({short_number(sums.tensor_dimension, 24)})",
         ]
         if generic:
-            row.append(diagram.algebra(index).name)
-            row.append(str(sums.generic_dimension))
-            row.append("yes" if sums.faithful else "no")
+            row += [diagram.algebra(index).name, sums.generic_dimension, "yes" if sums.faithful else "no"]
         table.add_row(*row)
-    out.print(table)
+    _out(table.render(width, exact))
     if generic:
         first_bad = diagram.first_unfaithful_of_tower()
         if first_bad is None:
-            out.print("The diagram algebra acts faithfully on every level of the tower.")
+            _out("The diagram algebra acts faithfully on every level of the tower.\n")
         else:
-            out.print(
-                f"The diagram algebra stops acting faithfully at level {format_level(tower.level_of(first_bad))} "
-                "(Σm² falls below its dimension there and at every level after)."
+            _out(
+                f"The diagram algebra stops acting faithfully at level {format_level(tower.level_of(first_bad))}\n"
+                "(Σm² falls below its dimension there and at every level after).\n"
             )
 
 
-def print_node(spec: str, kind: str, doc: dict[str, Any]) -> None:
-    from rich.table import Table
+def _number_line(prefix: str, n: int, width: int, exact: bool) -> str:
+    """``prefix`` then ``n`` with its digit count: all digits with ``exact`` or when they fit the
+    line, else shortened (the number on a line of its own when it is long)."""
+    note = digits_note(n)
+    if len(prefix) + digit_count(n) + 1 + len(note) <= width:
+        return f"{prefix}{n} {note}"
+    if exact:
+        return prefix.rstrip() + "\n" + exact_number(n)
+    return prefix + short_number(n, max(20, width - len(prefix)))
 
-    out = console()
-    out.print(f"{spec}, level {_level_text(doc['level'])}" + (f" ({kind})" if kind else "") + f": node {doc['label']}")
-    out.print(f"  multiplicity (paths from the root): {doc['multiplicity']}")
-    out.print(f"  dimension of the irreducible module: {doc['dimension']}")
+
+def print_node(spec: str, kind: str, doc: dict[str, Any], exact: bool = False) -> None:
+    width = output_width()
+    lines = [f"{spec}, level {_level_text(doc['level'])}" + (f" ({kind})" if kind else "") + f": node {doc['label']}",
+             _number_line("  multiplicity (paths from the root): ", doc["multiplicity"], width, exact),
+             _number_line("  dimension of the irreducible module: ", doc["dimension"], width, exact)]
+    _out("\n".join(lines) + "\n")
     for word in ("parents", "children"):
         entries: Sequence[dict[str, Any]] = doc[word]
         if not entries:
-            out.print(f"  {word}: none")
+            _out(f"  {word}: none\n")
             continue
-        table = Table(title=f"{word} (level {_level_text(entries[0]['level'])})", title_justify="left",
-                      show_edge=False, pad_edge=False)
-        table.add_column("node")
-        table.add_column("edges", justify="right", overflow="fold")
+        table = Table([Column("node", key=True), Column("edges", "right")],
+                      title=f"{word} (level {_level_text(entries[0]['level'])})")
         for e in entries:
-            table.add_row(e["label"], str(e["edges"]))
-        out.print(table)
+            table.add_row(e["label"], e["edges"])
+        _out(table.render(width, exact))
 
 
 def print_families(found: Sequence[Any]) -> None:
-    from rich.table import Table
-
-    table = Table(show_edge=False, pad_edge=False)
-    table.add_column("family")
-    table.add_column("keys")
-    table.add_column("what it is")
+    table = Table([Column("family", key=True), Column("keys", wrap=True), Column("what it is", wrap=True)])
     for f in found:
         keys = ", ".join(f"{k}{'' if k in f.required else '?'}" for k in f.keys)
         table.add_row(f.name, keys, f.summary)
-    out = console()
-    out.print(table)
-    out.print("Keys marked ? are optional. `towerscope families --json` gives each key's meaning.")
+    _out(table.render(output_width()))
+    _out("Keys marked ? are optional. `towerscope families --json` gives each key's meaning.\n")

@@ -26,6 +26,8 @@ def add_commands(sub: argparse._SubParsersAction) -> None:
     out.add_argument("--json", action="store_true", help="one JSON object (see the CLI contract)")
     out.add_argument("--csv", action="store_true", help="CSV: level,label,multiplicity,dimension")
     p.add_argument("--sums-only", action="store_true", help="print only the table of level sums")
+    p.add_argument("--exact", action="store_true", help="every digit of every number (by default a number "
+                   "too wide for the screen is shortened, with its digit count)")
     p.set_defaults(handler=run)
 
 
@@ -58,5 +60,5 @@ def run(args: argparse.Namespace) -> int:
     else:
         from tui.cli.tables import print_levels
 
-        print_levels(diagram, upto, nodes=not args.sums_only, start=start)
+        print_levels(diagram, upto, nodes=not args.sums_only, start=start, exact=args.exact)
     return 0

@@ -18,6 +18,8 @@ def add_commands(sub: argparse._SubParsersAction) -> None:
     p.add_argument("--level", required=True, metavar="L", help="the level (3, 2.5, 5/2, 2+1/2)")
     p.add_argument("--label", required=True, metavar="X", help="the node, e.g. (3,1)")
     p.add_argument("--json", action="store_true", help="one JSON object (see the CLI contract)")
+    p.add_argument("--exact", action="store_true", help="every digit of the multiplicity (by default a number "
+                   "too wide for the screen is shortened, with its digit count)")
     p.set_defaults(handler=run)
 
 
@@ -37,5 +39,5 @@ def run(args: argparse.Namespace) -> int:
     else:
         from tui.cli.tables import print_node
 
-        print_node(tower.spec, tower.level_kind(index), document)
+        print_node(tower.spec, tower.level_kind(index), document, exact=args.exact)
     return 0
