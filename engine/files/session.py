@@ -26,7 +26,9 @@ from typing import Any
 
 from engine.errors import UserError
 from engine.files.atomic import write_text_atomic
+from engine.files.toml_checks import nesting_depth
 from engine.levels import LevelError, level_to_json, parse_level
+from engine.numbers_in import read_whole
 
 FORMAT = "towerscope-session"
 VERSION = 1
@@ -119,7 +121,9 @@ def load_session(path: str | os.PathLike[str]) -> Session:
 def parse_session(text: str) -> Session:
     """A Session from the text of a session file."""
     try:
-        document = json.loads(text)
+        document = json.loads(text, parse_int=_json_int)
+    except RecursionError:
+        raise SessionError(f"nests lists or objects too deeply (a session is at most {MAX_DEPTH} deep)") from None
     except json.JSONDecodeError as exc:
         if not text.strip():
             raise SessionError("the file is empty (expected a JSON session object)") from None
@@ -144,6 +148,10 @@ def parse_session(text: str) -> Session:
     tower = document.get("tower")
     if not isinstance(tower, str) or not tower.strip():
         raise SessionError("field 'tower' must be a tower spec such as \"symmetric:n=4\"")
+    if any(ch < " " or ch == "\x7f" for ch in tower):
+        raise SessionError("field 'tower' holds a control character (a NUL byte or similar); a tower spec is one line of text")
+    if nesting_depth(document) > MAX_DEPTH:
+        raise SessionError(f"nests lists or objects more than {MAX_DEPTH} deep")
     node = document.get("node")
     if node is not None and not isinstance(node, str):
         raise SessionError(f"field 'node' must be a node label such as \"(3,1)\" or null, found {_kind(node)}")
@@ -158,6 +166,19 @@ def parse_session(text: str) -> Session:
         session.notes[mark] = note
     session.view = _view(document.get("view", {}))
     return session
+
+
+#: nesting of a session document (it is 3 deep)
+MAX_DEPTH = 32
+
+
+def _json_int(text: str) -> int:
+    """A JSON integer, its digits counted before conversion (``engine.numbers_in``)."""
+    sign = -1 if text.startswith("-") else 1
+    try:
+        return sign * read_whole(text.lstrip("-"), "a number in the session", max_digits=40)
+    except UserError as exc:
+        raise SessionError(str(exc)) from None
 
 
 def _kind(value: object) -> str:
