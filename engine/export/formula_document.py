@@ -11,11 +11,12 @@ for a node of a half level), and with the shifts given as fields
 
 from __future__ import annotations
 
+import math
 from typing import Any
 
 from engine.capabilities import ClosedForm, missing
 from engine.closed_forms import SymmetricClosedForm
-from engine.errors import UserError
+from engine.errors import TooLarge, UserError
 from engine.tower import Node, Tower
 
 
@@ -44,7 +45,25 @@ def closed_form_of(tower: Tower, text: str) -> SymmetricClosedForm:
     return form
 
 
+#: decimal digits the checked values of a formula may hold together (about 10 MB of text)
+MAX_VALUE_DIGITS = 5_000_000
+
+
+def check_values_size(form: SymmetricClosedForm, count: int) -> None:
+    """TooLarge, with the estimate, when the values at k = 0..count would hold more than
+    MAX_VALUE_DIGITS digits: the value at k has at most about k·log10(largest base) + 1 digits
+    (the exponential sum Σ b_j·j^k), so together about count²/2 · log10(base)."""
+    base = max((j for j in form.powers if j > 1), default=2)
+    digits = (count + 1) + int(count * (count + 1) / 2 * math.log10(base))
+    if digits > MAX_VALUE_DIGITS:
+        raise TooLarge(
+            f"the values at k = 0..{count:,} would hold about {digits:,} digits (the limit is "
+            f"{MAX_VALUE_DIGITS:,}); ask for a smaller --check"
+        )
+
+
 def formula_document(tower: Tower, form: SymmetricClosedForm, count: int) -> dict[str, Any]:
+    check_values_size(form, count)
     shift = 1 if form.half else 0
     return {
         "tower": tower.spec,

@@ -11,7 +11,9 @@ from __future__ import annotations
 from typing import Any
 
 from engine.encodings import Encoding
+from engine.errors import TooLarge
 from engine.levels import level_to_json
+from engine.numbers_in import describe
 from engine.paths import Path, PathIndex, check_rank
 from engine.tower import Node, Tower
 
@@ -34,6 +36,10 @@ def path_entry(index: PathIndex, rank: int, path: Path, encoding: Encoding | Non
     return entry
 
 
+#: labels a listing of paths may hold (about 100 MB of document)
+MAX_LISTED_LABELS = 2_000_000
+
+
 def paths_document(
     index: PathIndex, level: int, node: Node, start: int, count: int, encoding: Encoding | None = None
 ) -> dict[str, Any]:
@@ -41,6 +47,12 @@ def paths_document(
     tower = index.diagram.tower
     total = index.total(level, node)
     check_rank(start, total, tower.format(node))
+    shown = max(0, min(count, total - start))
+    if shown * (level + 1) > MAX_LISTED_LABELS:
+        raise TooLarge(
+            f"listing {describe(shown)} paths of {level + 1:,} nodes each would write about "
+            f"{describe(shown * (level + 1))} labels (the limit is {MAX_LISTED_LABELS:,}); ask for a smaller --count"
+        )
     listed = []
     for rank, path in zip(range(start, start + count), index.iterate(level, node, start)):
         listed.append(path_entry(index, rank, path, encoding))
