@@ -215,7 +215,7 @@ def parse_rank(text: str, total: int | None = None) -> int:
     try:
         value = read_big(body, "a rank", max_digits=MAX_RANK_DIGITS)
     except NumberError as exc:
-        raise PathError(f"{exc} (-1 for the last)") from None
+        raise PathError(f"not a rank: {exc} (-1 for the last)") from None
     if negative:
         if total is None:
             raise PathError(f"rank {quote(text)} is negative")
