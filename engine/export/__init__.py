@@ -3,13 +3,18 @@
 from __future__ import annotations
 
 from pathlib import PurePath
+from typing import TYPE_CHECKING
 
 from engine.diagram import Diagram
 from engine.errors import UserError
 
+if TYPE_CHECKING:
+    from engine.export.figure import FigureOptions
+
 #: format name → (file extension, what it is)
 FORMATS: dict[str, tuple[str, str]] = {
     "tikz": (".tikz", "a TikZ picture of the diagram"),
+    "svg": (".svg", "an SVG picture of the diagram (no LaTeX needed)"),
     "latex": (".tex", "a LaTeX table of the decompositions"),
     "dot": (".dot", "a Graphviz DOT graph"),
     "csv": (".csv", "CSV: level, label, multiplicity, dimension"),
@@ -27,8 +32,9 @@ def format_for_path(path: str) -> str:
     raise UserError(f"cannot tell the format from {PurePath(path).name!r} (use one of {known})")
 
 
-def render(diagram: Diagram, upto: int, fmt: str) -> str:
-    """Levels 0..upto (indices) of a built or buildable diagram in the format ``fmt``."""
+def render(diagram: Diagram, upto: int, fmt: str, figure: "FigureOptions | None" = None) -> str:
+    """Levels 0..upto (indices) of a built or buildable diagram in the format ``fmt``; ``figure``
+    holds the options of the pictures (TikZ, SVG)."""
     if fmt == "dot":
         from engine.export.dot import to_dot
 
@@ -44,7 +50,11 @@ def render(diagram: Diagram, upto: int, fmt: str) -> str:
     if fmt == "tikz":
         from engine.export.tikz import to_tikz
 
-        return to_tikz(diagram, upto)
+        return to_tikz(diagram, upto, figure)
+    if fmt == "svg":
+        from engine.export.svg import to_svg
+
+        return to_svg(diagram, upto, figure)
     if fmt == "json":
         import json
 

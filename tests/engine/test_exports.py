@@ -24,9 +24,9 @@ def test_latex_table_without_a_diagram_algebra():
 def test_tikz_has_every_node_and_edge():
     d = Diagram(parse_spec("symmetric:n=4,halves=no"))
     text = to_tikz(d, 3)
-    nodes = re.findall(r"\\node \((n\d+x\d+)\)", text)
+    nodes = re.findall(r"\\node\[[^]]*\] \((n\d+x\d+)\)", text)
     assert len(nodes) == sum(len(d.level(i)) for i in range(4))
-    edges = re.findall(r"\\draw \((n\d+x\d+)\) --(?: node\[[^]]*\] \{\\scriptsize (\d+)\})? \((n\d+x\d+)\);", text)
+    edges = re.findall(r"\\draw\[\w+\] \((n\d+x\d+)\) --(?: node\[[^]]*\] \{(\d+)\})? \((n\d+x\d+)\);", text)
     assert len(edges) == sum(len(d.children(i, n)) for i in range(3) for n in d.level(i))
     # (3,1) -> (3,1) through (3) and (2,1): two edges, labelled 2
     assert any(count == "2" for _, count, _ in edges)
