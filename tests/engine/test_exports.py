@@ -11,8 +11,9 @@ from engine.specs import parse_spec
 def test_latex_table_rows_are_the_decompositions():
     # S_3 on C^3, V⊗V = 2·(3) + 3·(2,1) + (1,1,1) (common practice); Σm² = 14 = B(4) − 1 = 15 − 1
     text = to_latex_table(Diagram(parse_spec("symmetric:n=3")), 4)
-    assert "$2$ & 2\\,(3) + 3\\,(2,1) + (1,1,1) & 14 & 15 \\\\" in text
-    assert "$1\\frac{1}{2}$ & 2\\,(2) + (1,1) & 5 & 5 \\\\" in text
+    assert "$2$ & $2\\,(3) + 3\\,(2,1) + (1,1,1)$ & 14 & $P_2(3)$ & 15 \\\\" in text
+    assert "$1\\frac{1}{2}$ & $2\\,(2) + (1,1)$ & 5 & $P_{1\\frac{1}{2}}(3)$ & 5 \\\\" in text
+    assert "$\\frac{1}{2}$ & $(2)$ & 1 & $P_{\\frac{1}{2}}(3)$ & 1 \\\\" in text
     assert text.count("\\\\") == 1 + 5  # header and one row per level
 
 
