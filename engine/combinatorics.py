@@ -7,6 +7,7 @@ Mathematics*, 6.1 (explicit formula S(k,t) = (1/t!) Σ_j (−1)^{t−j} C(t,j) j
 
 from __future__ import annotations
 
+import threading
 from functools import lru_cache
 from math import comb, factorial
 
@@ -34,17 +35,28 @@ def stirling2(k: int, t: int) -> int:
     return stirling2_row(k, t)[t]
 
 
-@lru_cache(maxsize=1024)
+#: B(0), B(1), ... as far as computed, and the last row of the Bell triangle (levels ask for
+#: B(2k) level after level: continuing the triangle makes all of them cost what the last one does)
+_BELLS: list[int] = [1]
+_BELL_ROW: list[int] = [1]
+_BELL_LOCK = threading.Lock()
+
+
 def bell(k: int) -> int:
     """Bell number B(k), the number of set partitions of a k-set (OEIS A000110),
-    by the Bell triangle (Aitken's array)."""
-    row = [1]
-    for _ in range(k):
-        new = [row[-1]]
-        for x in row:
-            new.append(new[-1] + x)
-        row = new
-    return row[0]
+    by the Bell triangle (Aitken's array), continued from the last row computed."""
+    global _BELL_ROW
+    if k < len(_BELLS):
+        return _BELLS[k]
+    with _BELL_LOCK:
+        row = _BELL_ROW
+        while len(_BELLS) <= k:
+            new = [row[-1]]
+            for x in row:
+                new.append(new[-1] + x)
+            row = _BELL_ROW = new
+            _BELLS.append(row[0])
+    return _BELLS[k]
 
 
 def double_factorial_odd(k: int) -> int:

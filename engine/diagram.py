@@ -19,6 +19,7 @@ from typing import Callable, Hashable, Iterator, Protocol
 
 from engine.capabilities import AlgebraLevel, ClosedForm, DiagramAlgebra, LevelJump, SizeGuard
 from engine.errors import Cancelled, TooLarge
+from engine.path_counts import PathCounts
 from engine.tower import Edge, Node, Tower
 
 #: default size guard: refuse builds estimated to walk more edges than this
@@ -70,21 +71,15 @@ class Diagram:
         self.tower = tower
         self.edge_limit = edge_limit
         self.digit_limit = digit_limit
-        root = tower.root()
-        # Nodes are numbered as they are first met; levels and the edge cache work on the numbers
-        # (small-int keys hash and compare faster than tuples), the public view maps them back.
-        self._ids: dict[Node, int] = {root: 0}
-        self._node_of: list[Node] = [root]
-        self._levels: list[dict[int, int]] = [{0: 1}]
+        self._counts = PathCounts(tower)
+        #: public views of built levels: index → {node: multiplicity}
         self._public: dict[int, dict[Node, int]] = {}
-        self._children: dict[Hashable, dict[int, tuple[tuple[int, ...], tuple[int, ...] | None]]] = {}
         self._sorted: dict[int, list[Node]] = {}
         self._sums: dict[int, LevelSums] = {}
         #: closed-form multiplicities asked for at levels not built (a few, kept briefly)
         self._closed: dict[tuple[int, Node], int] = {}
         self._reverse: dict[int, dict[Node, list[Edge]]] = {}
         self._lock = threading.RLock()
-        self._id_lock = threading.Lock()
         self._guard = tower.capability(SizeGuard)
         self._closed_form = tower.capability(ClosedForm)
         self._jump = tower.capability(LevelJump)
@@ -118,7 +113,7 @@ class Diagram:
     @property
     def built(self) -> int:
         """Index of the deepest level built so far."""
-        return len(self._levels) - 1
+        return len(self._counts.levels) - 1
 
     def check_size(self, index: int) -> None:
         """Raise TooLarge when building up to ``index`` is estimated to exceed the edge limit."""
@@ -173,63 +168,9 @@ class Diagram:
             if progress is not None:
                 progress(span, span)
 
-    def _step(self, index: int, node: Node) -> tuple[tuple[int, ...], tuple[int, ...] | None]:
-        cache = self._children.setdefault(self.tower.step_key(index), {})
-        with self._id_lock:
-            ident = self._id(node)
-        found = cache.get(ident)
-        if found is None:
-            found = cache[ident] = self._compute_step(index, ident)
-        return found
-
-    def _id(self, node: Node) -> int:
-        """The number of a node (call with ``_id_lock`` held when it may be new)."""
-        ident = self._ids.get(node)
-        if ident is None:
-            ident = self._ids[node] = len(self._node_of)
-            self._node_of.append(node)
-        return ident
-
-    def _compute_step(self, index: int, ident: int) -> tuple[tuple[int, ...], tuple[int, ...] | None]:
-        pairs = self.tower.children(index, self._node_of[ident])
-        number = self._id
-        with self._id_lock:  # the UI thread may number nodes while a worker builds
-            kids = tuple([number(child) for child, _ in pairs])
-        counts = tuple([edges for _, edges in pairs])
-        if counts.count(1) == len(counts):
-            return kids, None
-        return kids, counts
-
     def _build_next(self, progress: Callable[[float], None] | None, cancel: CancelToken | None) -> None:
         """Build the level after the deepest one (``ensure`` has checked that the tower has it)."""
-        index = self.built
-        prev = self._levels[index]
-        cache = self._children.setdefault(self.tower.step_key(index), {})
-        compute = self._compute_step
-        new: dict[int, int] = {}
-        get = new.get
-        total = len(prev)
-        count = 0
-        for node, m in prev.items():
-            step = cache.get(node)
-            if step is None:
-                step = cache[node] = compute(index, node)
-            kids, counts = step
-            if counts is None:
-                for child in kids:
-                    new[child] = get(child, 0) + m
-            else:
-                for child, e in zip(kids, counts):
-                    new[child] = get(child, 0) + m * e
-            count += 1
-            if count % _CHECK_EVERY == 0:
-                if cancel is not None and cancel.is_set():
-                    raise Cancelled()
-                if progress is not None:
-                    progress(count / total)
-        if cancel is not None and cancel.is_set():
-            raise Cancelled()
-        self._levels.append(new)
+        self._counts.build_next(progress, cancel)
 
     # ----- reading --------------------------------------------------------------------------
     def level(self, index: int, progress: Progress | None = None, cancel: CancelToken | None = None) -> dict[Node, int]:
@@ -237,8 +178,7 @@ class Diagram:
         self.ensure(index, progress, cancel)
         found = self._public.get(index)
         if found is None:
-            node_of = self._node_of
-            found = self._public[index] = {node_of[i]: m for i, m in self._levels[index].items()}
+            found = self._public[index] = self._counts.level(index)
         return found
 
     def nodes(self, index: int) -> list[Node]:
@@ -254,8 +194,7 @@ class Diagram:
         not built yet."""
         self.tower.check_index(index)
         if index <= self.built:
-            ident = self._ids.get(node)
-            return 0 if ident is None else self._levels[index].get(ident, 0)
+            return self._counts.multiplicity(index, node)
         key = (index, node)
         if key in self._closed:
             return self._closed[key]
@@ -346,9 +285,7 @@ class Diagram:
         """Nodes of the next level joined to ``node``, with edge counts (empty at the last level)."""
         if self.tower.max_index is not None and index >= self.tower.max_index:
             return []
-        kids, counts = self._step(index, node)
-        node_of = self._node_of
-        found = [(node_of[k], 1 if counts is None else counts[n]) for n, k in enumerate(kids)]
+        found = self._counts.edges(index, node)
         key = self.tower.sort_key
         return sorted(found, key=lambda ce: key(ce[0], index + 1))
 
@@ -377,7 +314,9 @@ class Diagram:
         found = self._sums.get(index)
         if found is not None:
             return found
-        found = self._sums_of(index, self.level(index, progress, cancel), cancel)
+        self.ensure(index, progress, cancel)
+        total, squares, weighted = self._counts.sums(index, cancel)
+        found = LevelSums(total, squares, weighted, self.tower.tensor_dimension(index), self.generic_dimension(index))
         self._sums[index] = found
         return found
 

@@ -112,6 +112,9 @@ class MatrixTower(Tower):
     def step_key(self, index: int) -> int:
         return index % len(self.pattern)
 
+    def space_key(self, index: int) -> int:
+        return index % len(self.pattern)  # the node set of the level
+
     def level_kind(self, index: int) -> str:
         return self._kinds[index % len(self._kinds)] if self._kinds else self.node_set(index).name
 

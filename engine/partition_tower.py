@@ -106,6 +106,11 @@ class OneBoxTower(Tower):
     def step_key(self, index: int) -> int:
         return 0  # every step tensors with the same V
 
+    def space_key(self, index: int) -> int:
+        # O, Sp: level k holds partitions of sizes ≡ k (mod 2), each level containing the one two
+        # below; GL: level k holds the partitions of k, its own space
+        return index % 2 if self.removes else index
+
     def tensor_dimension(self, index: int) -> int:
         return self.n**index
 

@@ -74,6 +74,13 @@ class Tower(ABC):
         """children(index, node) depends only on (step_key(index), node)."""
         return index
 
+    def space_key(self, index: int) -> Hashable:
+        """Levels with the same space key share one numbering of their nodes in the diagram's
+        sweep (``engine.path_counts``), and ``dimension(index, node)`` must depend only on
+        (space_key(index), node).  By default every level is its own space; towers whose levels
+        repeat a node set (finite towers, the two kinds of level of S_N) say so to be swept faster."""
+        return index
+
     def level_kind(self, index: int) -> str:
         """A short word for the group acting at this level (e.g. ``S_4`` or ``S_3``)."""
         return ""

@@ -79,6 +79,9 @@ class AlternatingTower(Tower):
     def step_key(self, index: int) -> int:
         return index % 2
 
+    def space_key(self, index: int) -> int:
+        return index % 2
+
     def level_kind(self, index: int) -> str:
         return f"A_{self.n - 1}" if index % 2 else f"A_{self.n}"
 

@@ -66,6 +66,9 @@ class SymmetricTower(Tower):
     def step_key(self, index: int) -> int:
         return index % 2 if self.halves else 0
 
+    def space_key(self, index: int) -> int:
+        return index % 2 if self.halves else 0  # partitions of N, and of N−1 at half levels
+
     def level_kind(self, index: int) -> str:
         return f"S_{self.n - 1}" if self._is_half(index) else f"S_{self.n}"
 

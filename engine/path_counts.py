@@ -1,0 +1,224 @@
+"""Counting paths level by level: the sweep under ``engine.diagram.Diagram``.
+
+m(root) = 1 and m(child) = Σ_parents m(parent)·edges (Bratteli 1972; Goodman, de la Harpe,
+Jones 1989, ch. 2).
+
+Layout.  The nodes of a level live in a *space* (``tower.space_key(index)``: e.g. the
+partitions of N at the integer levels of the S_N tower, the nodes of one node set of a finite
+tower, or the level alone).  A space numbers its nodes 0, 1, 2, ... as it meets them; a level is
+a list of multiplicities indexed by those numbers (0 for a node of the space not on the level).
+A *passage* joins a source space to a target space by one step kind (``tower.step_key``): it
+asks the tower for the children of each source node once and keeps, for every target node, the
+list of its source parents (repeated by the edge count when the count is small).  A level is then
+*pulled*: ``[sum(map(previous.__getitem__, parents)) for parents in passage.parents]`` — one
+C-level reduction per node, no bytecode per edge, and a passage met again (the repeating steps
+of S_N, O(N), finite towers) only learns the nodes that are new.
+"""
+
+from __future__ import annotations
+
+import threading
+from itertools import compress, repeat
+from operator import mul
+from typing import Callable, Hashable
+
+from engine.errors import Cancelled
+from engine.tower import Node, Tower
+
+#: edge counts up to this are stored as repeated parents (pulled at C speed); larger counts
+#: (e.g. a tensor-graph file with an entry 10^18) are kept with their count and multiplied
+REPEAT_UP_TO = 16
+#: nodes pulled between two looks at the cancel token
+CHUNK = 1 << 15
+
+
+class Space:
+    """The nodes of one kind of level, numbered as met."""
+
+    __slots__ = ("key", "ids", "nodes", "dims")
+
+    def __init__(self, key: Hashable) -> None:
+        self.key = key
+        self.ids: dict[Node, int] = {}
+        self.nodes: list[Node] = []
+        #: dimensions of the nodes, by number, as far as they were asked for (``dimensions``)
+        self.dims: list[int] = []
+
+    def number(self, node: Node) -> int:
+        ident = self.ids.get(node)
+        if ident is None:
+            ident = self.ids[node] = len(self.nodes)
+            self.nodes.append(node)
+        return ident
+
+
+class Passage:
+    """One step kind from a source space to a target space, with its edges both ways."""
+
+    __slots__ = ("source", "target", "kids", "counts", "parents", "weighted", "upto")
+
+    def __init__(self, source: Space, target: Space) -> None:
+        self.source = source
+        self.target = target
+        self.kids: dict[int, tuple[int, ...]] = {}
+        self.counts: dict[int, tuple[int, ...]] = {}
+        #: by target number: the source numbers stepping to it (repeated by small edge counts);
+        #: tuples, which the garbage collector stops tracking (lists would make every collection
+        #: walk them all)
+        self.parents: list[tuple[int, ...]] = []
+        #: target number → [(source number, edge count)] for counts above REPEAT_UP_TO
+        self.weighted: dict[int, list[tuple[int, int]]] = {}
+        #: every source number below this has its children learned
+        self.upto = 0
+
+
+class PathCounts:
+    """Spaces, passages and the levels built so far (level index → (space, multiplicities))."""
+
+    def __init__(self, tower: Tower) -> None:
+        self.tower = tower
+        self._spaces: dict[Hashable, Space] = {}
+        self._passages: dict[tuple[Hashable, Hashable, Hashable], Passage] = {}
+        root_space = self.space(0)
+        root_space.number(tower.root())
+        self.levels: list[tuple[Space, list[int]]] = [(root_space, [1])]
+        self.lock = threading.RLock()  # numbering and learning (the UI thread may ask too)
+
+    def space(self, index: int) -> Space:
+        key = self.tower.space_key(index)
+        found = self._spaces.get(key)
+        if found is None:
+            found = self._spaces.setdefault(key, Space(key))
+        return found
+
+    def passage(self, index: int) -> Passage:
+        source, target = self.space(index), self.space(index + 1)
+        key = (source.key, self.tower.step_key(index), target.key)
+        found = self._passages.get(key)
+        if found is None:
+            with self.lock:
+                found = self._passages.setdefault(key, Passage(source, target))
+        return found
+
+    # ----- edges ----------------------------------------------------------------------------
+    def _learn(self, index: int, passage: Passage, ident: int) -> None:
+        """Ask the tower for the children of one source node; register the edges both ways."""
+        kids = passage.kids
+        if ident in kids:
+            return
+        pairs = self.tower.children(index, passage.source.nodes[ident])
+        target = passage.target
+        ids, nodes, parents = target.ids, target.nodes, passage.parents
+        if len(parents) < len(nodes):
+            parents.extend([()] * (len(nodes) - len(parents)))
+        found: list[int] = []
+        counts: list[int] | None = None
+        for child, e in pairs:
+            c = ids.get(child)
+            if c is None:
+                c = ids[child] = len(nodes)
+                nodes.append(child)
+                parents.append(())
+            found.append(c)
+            if e == 1:
+                parents[c] += (ident,)
+            else:
+                if counts is None:
+                    counts = [1] * (len(found) - 1)
+                if e <= REPEAT_UP_TO:
+                    parents[c] += (ident,) * e
+                else:
+                    passage.weighted.setdefault(c, []).append((ident, e))
+            if counts is not None:
+                counts.append(e)
+        if counts is not None:
+            passage.counts[ident] = tuple(counts)
+        kids[ident] = tuple(found)
+
+    def edges(self, index: int, node: Node) -> list[tuple[Node, int]]:
+        """The children of ``node`` at ``index`` with edge counts (learned once per passage)."""
+        with self.lock:
+            passage = self.passage(index)
+            ident = passage.source.number(node)
+            self._learn(index, passage, ident)
+            kids, counts = passage.kids[ident], passage.counts.get(ident)
+            nodes = passage.target.nodes
+            return [(nodes[k], 1 if counts is None else counts[n]) for n, k in enumerate(kids)]
+
+    # ----- the sweep ------------------------------------------------------------------------
+    def build_next(self, progress: Callable[[float], None] | None = None, cancel=None) -> None:
+        """Build the level after the deepest one."""
+        index = len(self.levels) - 1
+        source_space, previous = self.levels[index]
+        passage = self.passage(index)
+        learn = self._learn
+        with self.lock:
+            # learn the nodes of the level not learned yet (nodes of the space that are not on
+            # the level, value 0, are left alone: their children may lie far from the level)
+            kids = passage.kids
+            start = passage.upto
+            new = [j for j in compress(range(start, len(previous)), previous[start:]) if j not in kids]
+            for count, ident in enumerate(new, 1):
+                learn(index, passage, ident)
+                if count % 2048 == 0:
+                    if cancel is not None and cancel.is_set():
+                        raise Cancelled()
+                    if progress is not None:
+                        progress(0.5 * count / len(new))
+            while passage.upto in kids:
+                passage.upto += 1
+            parents = passage.parents
+            size = len(passage.target.nodes)
+            if len(parents) < size:
+                parents.extend([()] * (size - len(parents)))
+        if len(previous) < len(source_space.nodes):  # sources numbered after the level was built
+            previous = previous + [0] * (len(source_space.nodes) - len(previous))
+        get = previous.__getitem__
+        values: list[int] = []
+        for start in range(0, size, CHUNK):
+            with self.lock:
+                part = parents[start:start + CHUNK] if size > CHUNK else parents[:size]
+                values.extend([sum(map(get, p)) for p in part])
+            if cancel is not None and cancel.is_set():
+                raise Cancelled()
+            if progress is not None and size > CHUNK:
+                progress(0.5 + 0.5 * min(start + CHUNK, size) / size)
+        for child, pairs in passage.weighted.items():
+            if child < size:
+                values[child] += sum(get(p) * e for p, e in pairs)
+        if cancel is not None and cancel.is_set():
+            raise Cancelled()
+        self.levels.append((passage.target, values))
+
+    # ----- reading --------------------------------------------------------------------------
+    def multiplicity(self, index: int, node: Node) -> int:
+        space, values = self.levels[index]
+        ident = space.ids.get(node)
+        return 0 if ident is None or ident >= len(values) else values[ident]
+
+    def level(self, index: int) -> dict[Node, int]:
+        """node → multiplicity for the nodes with a path (C-level: ``compress`` drops the zeros)."""
+        space, values = self.levels[index]
+        return dict(compress(zip(space.nodes, values), values))
+
+    def dimensions(self, index: int) -> list[int]:
+        """The dimensions of the level's space, by number, computed once per node of a space."""
+        space, values = self.levels[index]
+        dims = space.dims
+        if len(dims) < len(values):
+            with self.lock:
+                dimension = self.tower.dimension
+                nodes = space.nodes
+                dims.extend([dimension(index, nodes[j]) for j in range(len(dims), len(values))])
+        return dims
+
+    def sums(self, index: int, cancel=None) -> tuple[int, int, int]:
+        """Σm, Σm², Σm·dim of a built level, at C speed over its lists."""
+        _, values = self.levels[index]
+        dims = self.dimensions(index)
+        if cancel is not None and cancel.is_set():
+            raise Cancelled()
+        return sum(values), sum(map(mul, values, values)), sum(map(mul, values, dims))
+
+
+__all__ = ["CHUNK", "PathCounts", "REPEAT_UP_TO"]
