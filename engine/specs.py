@@ -13,7 +13,7 @@ from dataclasses import dataclass
 from typing import Callable
 
 from engine.errors import SpecError, UserError
-from engine.numbers_in import NumberError, read_whole
+from engine.numbers_in import NumberError, quote, read_whole
 from engine.text import split_outside_parentheses
 from engine.tower import Tower
 
@@ -74,14 +74,14 @@ def split_spec(spec: str) -> tuple[str, dict[str, str]]:
         try:
             items = split_outside_parentheses(rest, lambda ch: ch == ",")
         except UserError as exc:
-            raise SpecError(f"in spec {spec!r}: {exc}") from None
+            raise SpecError(f"in spec {quote(spec)}: {exc}") from None
         for item in items:
             key, eq, value = item.partition("=")
             key = key.strip()
             if not eq or not key:
-                raise SpecError(f"in spec {spec!r}: {item.strip()!r} is not key=value")
+                raise SpecError(f"in spec {quote(spec)}: {quote(item.strip())} is not key=value")
             if key in params:
-                raise SpecError(f"in spec {spec!r}: key {key!r} given twice")
+                raise SpecError(f"in spec {quote(spec)}: key {quote(key)} given twice")
             params[key] = value.strip()
     return name, params
 
@@ -92,14 +92,14 @@ def parse_spec(spec: str) -> Tower:
     registry = families()
     family = registry.get(name)
     if family is None:
-        raise SpecError(f"unknown tower family {name!r} (known: {', '.join(registry)})")
+        raise SpecError(f"unknown tower family {quote(name)} (known: {', '.join(registry)})")
     for key in params:
         if key not in family.keys:
             accepted = ", ".join(family.keys) or "none"
-            raise SpecError(f"{family.name}: unknown key {key!r} (accepted keys: {accepted})")
+            raise SpecError(f"{family.name}: unknown key {quote(key)} (accepted keys: {accepted})")
     for key in family.required:
         if key not in params:
-            raise SpecError(f"{family.name}: key {key!r} is required ({family.keys[key]})")
+            raise SpecError(f"{family.name}: key {quote(key)} is required ({family.keys[key]})")
     canonical = family.name + (":" + ",".join(f"{k}={v}" for k, v in params.items()) if params else "")
     return family.build(canonical, params)
 
@@ -113,19 +113,19 @@ def int_param(family: str, params: dict[str, str], key: str, *, minimum: int = 0
     raw = params.get(key)
     if raw is None:
         if default is None:
-            raise SpecError(f"{family}: key {key!r} is required")
+            raise SpecError(f"{family}: key {quote(key)} is required")
         return default
     try:
-        value = read_whole(raw, f"{family}: key {key!r}", max_digits=MAX_KEY_DIGITS)
+        value = read_whole(raw, f"{family}: key {quote(key)}", max_digits=MAX_KEY_DIGITS)
     except NumberError as exc:
         raise SpecError(str(exc)) from None
     if value < minimum:
-        raise SpecError(f"{family}: key {key!r} must be at least {minimum}, got {value}")
+        raise SpecError(f"{family}: key {quote(key)} must be at least {minimum}, got {value}")
     return value
 
 
 def choice_param(family: str, params: dict[str, str], key: str, choices: tuple[str, ...], default: str) -> str:
     raw = params.get(key, default)
     if raw not in choices:
-        raise SpecError(f"{family}: key {key!r} must be one of {', '.join(choices)}, got {raw!r}")
+        raise SpecError(f"{family}: key {quote(key)} must be one of {', '.join(choices)}, got {quote(raw)}")
     return raw

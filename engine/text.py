@@ -5,6 +5,7 @@ from __future__ import annotations
 from typing import Callable
 
 from engine.errors import UserError
+from engine.numbers_in import quote
 
 
 def split_outside_parentheses(text: str, is_separator: Callable[[str], bool]) -> list[str]:
@@ -19,13 +20,13 @@ def split_outside_parentheses(text: str, is_separator: Callable[[str], bool]) ->
         elif ch in ")]":
             depth -= 1
             if depth < 0:
-                raise UserError(f"unbalanced parentheses in {text!r}")
+                raise UserError(f"unbalanced parentheses in {quote(text)}")
         if depth == 0 and is_separator(ch):
             pieces.append("".join(current))
             current = []
         else:
             current.append(ch)
     if depth != 0:
-        raise UserError(f"unbalanced parentheses in {text!r}")
+        raise UserError(f"unbalanced parentheses in {quote(text)}")
     pieces.append("".join(current))
     return [p for p in pieces if p.strip()]
