@@ -7,7 +7,11 @@ Our own JSON schema, one object::
      "level": 3, "node": "(3,1)",
      "bookmarks": [{"level": 2.5, "label": "(2,1)"}],
      "notes": [{"level": 3, "label": "(3,1)", "text": "..."}],
-     "view": {"details": true, "panes": 7}}
+     "view": {"details": true, "panes": 3}}
+
+``view`` belongs to the program showing the session (the explorer's view settings): the engine
+keeps it as a JSON object of plain values and neither reads nor checks its keys, so files written
+by older and newer explorers stay readable.
 
 Levels are JSON numbers as in the CLI contract (halves are exact in binary).  Reading is pure and
 strict: every problem is a ``SessionError`` (a ``UserError``) whose one-line message names the
@@ -34,8 +38,6 @@ FORMAT = "towerscope-session"
 VERSION = 1
 #: refuse to read files larger than this (a session is a few kilobytes)
 MAX_BYTES = 8 * 1024 * 1024
-#: the most level panes a view may ask for
-MAX_PANES = 9
 
 
 class SessionError(UserError):
@@ -51,19 +53,14 @@ class Mark:
 
 
 @dataclass
-class ViewSettings:
-    details: bool = True
-    panes: int = 7
-
-
-@dataclass
 class Session:
     tower: str
     level: Fraction = Fraction(0)
     node: str | None = None
     bookmarks: list[Mark] = field(default_factory=list)
     notes: dict[Mark, str] = field(default_factory=dict)
-    view: ViewSettings = field(default_factory=ViewSettings)
+    #: the viewer's settings, opaque here: a JSON object of plain values (text, numbers, true/false)
+    view: dict[str, Any] = field(default_factory=dict)
 
 
 # ----- writing ------------------------------------------------------------------------------------
@@ -80,7 +77,7 @@ def session_to_document(session: Session) -> dict[str, Any]:
             for m, text in session.notes.items()
             if text
         ],
-        "view": {"details": session.view.details, "panes": session.view.panes},
+        "view": dict(session.view),
     }
 
 
@@ -217,16 +214,10 @@ def _mark(item: object, where: str, extra: set[str] = frozenset()) -> Mark:  # t
     return Mark(_level(item["level"], f"{where}.level"), label)
 
 
-def _view(value: object) -> ViewSettings:
+def _view(value: object) -> dict[str, Any]:
     if not isinstance(value, dict):
         raise SessionError(f"field 'view' must be an object, found {_kind(value)}")
-    unknown = sorted(set(value) - {"details", "panes"})
-    if unknown:
-        raise SessionError(f"field 'view' has an unknown key {unknown[0]!r} (keys: details, panes)")
-    details = value.get("details", True)
-    if not isinstance(details, bool):
-        raise SessionError("field 'view.details' must be true or false")
-    panes = value.get("panes", 7)
-    if isinstance(panes, bool) or not isinstance(panes, int) or not 1 <= panes <= MAX_PANES:
-        raise SessionError(f"field 'view.panes' must be a whole number from 1 to {MAX_PANES}")
-    return ViewSettings(details=details, panes=panes)
+    for key, item in value.items():
+        if item is not None and not isinstance(item, (bool, int, float, str)):
+            raise SessionError(f"field 'view.{key}' must be text, a number or true/false, found {_kind(item)}")
+    return dict(value)

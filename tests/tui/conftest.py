@@ -29,6 +29,15 @@ async def settle(pilot) -> None:  # noqa: ANN001 - a textual Pilot
         await pilot.pause()
 
 
+@pytest.fixture(autouse=True)
+def user_data(tmp_path_factory: pytest.TempPathFactory, monkeypatch: pytest.MonkeyPatch) -> Path:
+    """A user data folder of the test's own (autosave, settings), the legend already seen."""
+    folder = tmp_path_factory.mktemp("user-data")
+    (folder / "settings.json").write_text('{"legend_seen": true}')
+    monkeypatch.setenv("TOWERSCOPE_DATA", str(folder))
+    return folder
+
+
 @pytest.fixture
 def in_tmp(tmp_path: Path, monkeypatch: pytest.MonkeyPatch) -> Path:
     """Run in an empty folder with a ./sessions folder (the explorer's default save folder)."""

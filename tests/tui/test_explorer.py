@@ -207,10 +207,13 @@ async def test_details_toggle_and_narrow_terminal() -> None:
         await settle(pilot)
         shown = [p for p in app.screen.query(LevelPane) if p.display]
         assert len(shown) == 3 and app.screen.query_one(DetailsPane).display
+        before = sum(p.size.width for p in shown)
         await pilot.press("d")
         await settle(pilot)
         assert not app.screen.query_one(DetailsPane).display
-        assert len([p for p in app.screen.query(LevelPane) if p.display]) > 3
+        # fewer, wider panes before more: the panes take the details pane's room
+        now = [p for p in app.screen.query(LevelPane) if p.display]
+        assert len(now) == 3 and sum(p.size.width for p in now) > before
 
 
 async def test_details_show_the_closed_form_where_the_family_has_one() -> None:

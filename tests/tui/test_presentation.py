@@ -55,6 +55,14 @@ def test_drawing_has_one_box_per_part() -> None:
         assert [line.count("│") - 1 for line in inner] == list(shape)
 
 
-def test_large_shapes_are_summarised() -> None:
-    assert "too large" in draw_label("(80)", 28, 10)[0]
+def test_large_shapes_are_drawn_as_row_bars() -> None:
+    # (80) in 28 cells: one bar, to scale, with its length (row lengths of the partition, hand computation)
+    lines = draw_label("(80)", 28, 10)
+    assert lines[0] == "80 boxes, 1 rows, bars to scale" and lines[1].endswith(" 80")
+    # (30,30,30,5,1^20) in 8 lines: equal rows share a line; the bars keep the rows' proportions
+    shape = "(" + ",".join(["30"] * 3 + ["5"] + ["1"] * 20) + ")"
+    lines = draw_label(shape, 28, 8)
+    assert lines[0] == "115 boxes, 24 rows, bars to scale"
+    assert lines[1].endswith(" 30×3") and lines[2].endswith(" 5") and lines[3].endswith(" 1×20")
+    assert lines[1].count("█") == 20 and lines[2].count("█") == 5 * 20 // 30
     assert draw_label("((1),())", 20, 12)[0] == "first:"

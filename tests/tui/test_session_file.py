@@ -14,13 +14,13 @@ from engine.files.session import (
     Mark,
     Session,
     SessionError,
-    ViewSettings,
     load_session,
     parse_session,
     save_session,
     session_to_json,
 )
 from tui.explorer.session_files import read_session
+from tui.explorer.view_settings import ViewSettings
 
 SESSIONS = Path(__file__).resolve().parents[2] / "sessions"
 
@@ -32,7 +32,7 @@ def sample() -> Session:
         node="(2,1)",
         bookmarks=[Mark(Fraction(3), "(3,1)")],
         notes={Mark(Fraction(3), "(3,1)"): "a note with [brackets] and ⊗"},
-        view=ViewSettings(details=False, panes=3),
+        view=ViewSettings(details=False, panes=3).to_dict(),
     )
 
 
@@ -67,7 +67,7 @@ def test_save_into_missing_folder_is_a_user_error(tmp_path: Path) -> None:
         (f'{{"format": "{FORMAT}", "version": 1}}', "'tower'"),
         (f'{{"format": "{FORMAT}", "version": 1, "tower": "symmetric:n=4", "level": -1}}', "'level'"),
         (f'{{"format": "{FORMAT}", "version": 1, "tower": "t", "bookmarks": [{{"level": 1}}]}}', "bookmarks[0].label"),
-        (f'{{"format": "{FORMAT}", "version": 1, "tower": "t", "view": {{"panes": 0}}}}', "view.panes"),
+        (f'{{"format": "{FORMAT}", "version": 1, "tower": "t", "view": {{"panes": [0]}}}}', "view.panes"),
         (f'{{"format": "{FORMAT}", "version": 1, "tower": "t", "colour": "red"}}', "unknown field 'colour'"),
     ],
 )
@@ -84,12 +84,32 @@ def test_missing_and_binary_files(tmp_path: Path) -> None:
         load_session(tmp_path / "bin.json")
 
 
-def test_a_label_the_tower_lacks_is_refused(tmp_path: Path) -> None:
+def test_a_stale_bookmark_is_dropped_with_a_notice(tmp_path: Path) -> None:
     bad = sample()
-    bad.bookmarks = [Mark(Fraction(3), "(5)")]  # (5) is not a partition of 4
+    bad.bookmarks = [Mark(Fraction(3), "(5)"), Mark(Fraction(3), "(3,1)")]  # (5) is not a partition of 4
     path = save_session(tmp_path / "bad.json", bad)
-    with pytest.raises(Exception, match="a bookmark at level 3"):
-        read_session(path)
+    state = read_session(path)
+    assert state.bookmarks == [(6, (3, 1))]
+    assert any("dropped a bookmark on (5) at level 3" in n for n in state.notices)
+    assert state.modified  # the file still has the stale mark until saved again
+
+
+def test_a_level_deeper_than_the_guard_opens_at_the_deepest_allowed(tmp_path: Path) -> None:
+    deep = Session(tower="symmetric:n=40", level=Fraction(10**6), node="(40)")
+    state = read_session(save_session(tmp_path / "deep.json", deep))
+    state.diagram.check_size(state.index)  # allowed (the guard's estimate, no building)
+    with pytest.raises(UserError):
+        state.diagram.check_size(state.index + 1)
+    assert state.node is None and any("deeper than the explorer builds" in n for n in state.notices)
+
+
+def test_older_view_settings_still_open(tmp_path: Path) -> None:
+    # files written before the view left the engine: {"details": ..., "panes": 7} (a maximum then)
+    old = f'{{"format": "{FORMAT}", "version": 1, "tower": "symmetric:n=4", "view": {{"details": false, "panes": 7}}}}'
+    (tmp_path / "old.json").write_text(old)
+    state = read_session(tmp_path / "old.json")
+    assert state.view == ViewSettings(details=False, panes=None)
+    assert ViewSettings.from_dict({"pane_count": 5, "later": "kept by the engine"}).panes == 5
 
 
 @pytest.mark.parametrize("path", sorted(SESSIONS.glob("*.json")), ids=lambda p: p.name)

@@ -22,7 +22,7 @@ class Act:
     palette: bool = True
 
 
-MOVE, FIND, MARK, FILES, APP = "Moving", "Finding", "Marking", "Towers and files", "The app"
+MOVE, FIND, MARK, VIEW, FILES, APP = "Moving", "Finding", "Marking", "Views", "Towers and files", "The app"
 
 #: actions of the explorer's main screen
 MAIN: tuple[Act, ...] = (
@@ -30,8 +30,8 @@ MAIN: tuple[Act, ...] = (
     Act("move_level(1)", ("right", "l"), "on", "go to the next level", MOVE),
     Act("move_node(1)", ("down", "j"), "down", "select the next node on this level", MOVE),
     Act("move_node(-1)", ("up", "k"), "up", "select the previous node on this level", MOVE),
-    Act("move_node(10)", ("pagedown",), "page down", "move the selection ten nodes down", MOVE),
-    Act("move_node(-10)", ("pageup",), "page up", "move the selection ten nodes up", MOVE),
+    Act("move_page(1)", ("pagedown",), "page down", "move the selection one page down", MOVE),
+    Act("move_page(-1)", ("pageup",), "page up", "move the selection one page up", MOVE),
     Act("first_node", ("home",), "first node", "select the first node of the level", MOVE),
     Act("last_node", ("end",), "last node", "select the last node of the level", MOVE),
     Act("jump_level", ("g",), "level", "jump to a level: type 3, 2.5, 5/2 or 2+1/2", MOVE, footer=True),
@@ -41,7 +41,17 @@ MAIN: tuple[Act, ...] = (
     Act("clear_path", ("x",), "clear path", "stop highlighting a path in the level panes", FIND),
     Act("toggle_bookmark", ("b",), "mark", "bookmark the selected node, or remove its bookmark", MARK, footer=True),
     Act("edit_note", ("n",), "note", "write a note on the selected node", MARK, footer=True),
-    Act("toggle_details", ("d",), "details", "show or hide the details pane", MARK),
+    Act("toggle_details", ("d",), "details", "show or hide the details pane", VIEW),
+    Act("scroll_details(3)", ("right_square_bracket",), "details down", "scroll the details pane down", VIEW),
+    Act("scroll_details(-3)", ("left_square_bracket",), "details up", "scroll the details pane up", VIEW),
+    Act("fold_details", ("z",), "fold", "fold or unfold a long formula in the details pane", VIEW),
+    Act("copy_multiplicity", ("c",), "copy", "copy the exact multiplicity of the selected node to the clipboard", VIEW),
+    Act("more_panes(1)", ("plus", "equals_sign"), "more panes", "show more level panes (kept in the session)", VIEW),
+    Act("more_panes(-1)", ("minus",), "fewer panes", "show fewer, wider level panes (kept in the session)", VIEW),
+    Act("show_diagram", ("v",), "diagram", "draw the Bratteli diagram around this level, the selection's paths highlighted", VIEW, footer=True),
+    Act("plot_sums", ("m",), "plot", "plot Σm and Σm² against the algebra's dimension by level (log scale)", VIEW),
+    Act("show_algebra", ("a",), "algebra", "the level's diagram algebra: its diagrams drawn, products, the rank "
+        "of its action, the kernel and its generator, cell modules and Gram determinants", VIEW),
     Act("pick_tower", ("t",), "tower", "open another tower: pick the family, fill in its keys", FILES, footer=True),
     Act("save_session", ("s", "ctrl+s"), "save", "save the session (tower, place, bookmarks, notes, view)", FILES, footer=True),
     Act("open_session", ("o",), "open", "open a saved session file", FILES),
@@ -59,7 +69,8 @@ GLOBAL: tuple[Act, ...] = (
 ALL: tuple[Act, ...] = MAIN + GLOBAL
 
 _KEY_NAMES = {"slash": "/", "apostrophe": "'", "question_mark": "?", "pagedown": "PgDn", "pageup": "PgUp",
-              "left": "←", "right": "→", "up": "↑", "down": "↓", "escape": "Esc", "home": "Home", "end": "End"}
+              "left": "←", "right": "→", "up": "↑", "down": "↓", "escape": "Esc", "home": "Home", "end": "End",
+              "plus": "+", "minus": "-", "equals_sign": "=", "left_square_bracket": "[", "right_square_bracket": "]"}
 
 
 def key_text(key: str) -> str:

@@ -18,11 +18,12 @@ class PathShown(Message):
 
 @dataclass
 class BuildProgress(Message):
-    """Progress of a build: ``done`` out of ``total`` (any unit)."""
+    """Progress of a build: ``done`` out of ``total`` (any unit); ``index`` is the level built."""
 
     request: int
     done: float
     total: float
+    index: int = -1
 
     def can_replace(self, message: Message) -> bool:
         return isinstance(message, BuildProgress)
@@ -30,11 +31,20 @@ class BuildProgress(Message):
 
 @dataclass
 class LevelsReady(Message):
-    """The levels around ``index`` are built and sorted; the view may move there."""
+    """The asked level is built (or reached by a jump) and sorted; the view may move there."""
 
     request: int
     index: int
     node: Any
+    data: Any = None  # a view_model.LevelData
+    sums: Any = None  # its LevelSums
+
+
+@dataclass
+class SideReady(Message):
+    """A level that a side pane shows is ready (built in the background after the asked one)."""
+
+    data: Any  # a view_model.LevelData
 
 
 @dataclass

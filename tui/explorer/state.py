@@ -1,8 +1,10 @@
 """What the explorer is showing: the tower's diagram, the place, bookmarks, notes, view settings.
 
 The app owns one ``ExplorerState``; widgets render from it.  It converts to and from the engine's
-``Session`` (the file format), checking every label against the tower, so a session that names a
-node the tower does not have is refused whole, before anything on screen changes.
+``Session`` (the file format).  Reading is forgiving where it can be: a level deeper than the size
+guard allows opens at the deepest allowed level, and a bookmark or note on a node the tower does not
+have is dropped; each such change is a notice for the user (``ExplorerState.notices``).  Only a file
+that names no tower the engine can build is refused.
 """
 
 from __future__ import annotations
@@ -12,9 +14,12 @@ from pathlib import Path
 from typing import Any
 
 from engine.diagram import Diagram
-from engine.files.session import Mark, Session, ViewSettings
+from engine.errors import UserError
+from engine.files.session import Mark, Session
+from engine.levels import format_level
 from engine.specs import parse_spec
 from engine.tower import Node
+from tui.explorer.view_settings import ViewSettings
 
 Place = tuple[int, Node]
 
@@ -31,6 +36,10 @@ class ExplorerState:
     path: Path | None = None
     #: a path (one node per level index) highlighted in the panes, from the path browser
     highlighted: list[Any] = field(default_factory=list)
+    #: bookmarks, notes or view changed since the last save or open
+    modified: bool = False
+    #: what was changed to open a session file (shown once when the state is shown)
+    notices: list[str] = field(default_factory=list)
 
     @property
     def tower(self):  # noqa: ANN201 - a Tower
@@ -44,6 +53,7 @@ class ExplorerState:
     def toggle_bookmark(self, index: int, node: Node) -> bool:
         """Add or remove a bookmark; True when the node is now bookmarked."""
         place = (index, node)
+        self.modified = True
         if place in self.bookmarks:
             self.bookmarks.remove(place)
             return False
@@ -52,6 +62,9 @@ class ExplorerState:
 
     def set_note(self, index: int, node: Node, text: str) -> None:
         text = text.strip()
+        if text == self.notes.get((index, node), ""):
+            return
+        self.modified = True
         if text:
             self.notes[(index, node)] = text
         else:
@@ -80,30 +93,86 @@ class ExplorerState:
             node=None if self.node is None else fmt(self.node),
             bookmarks=[mark(p) for p in self.bookmarks],
             notes={mark(p): text for p, text in self.notes.items()},
-            view=ViewSettings(details=self.view.details, panes=self.view.panes),
+            view=self.view.to_dict(),
         )
 
 
-def state_from_session(session: Session, path: Path | None = None) -> ExplorerState:
-    """Check a session against its tower and make the state; a UserError names what does not fit."""
-    from engine.errors import UserError
-    from engine.levels import format_level
+def deepest_allowed(diagram: Diagram, index: int) -> int:
+    """``index`` if the diagram may show it, else the deepest level below it that the size guard
+    (and, where the family jumps, the digit guard) allows: a binary search, each check an estimate."""
+    from tui.explorer.view_model import by_jump
 
+    tower = diagram.tower
+    if tower.max_index is not None:
+        index = min(index, tower.max_index)
+
+    def allowed(i: int) -> bool:
+        try:
+            if by_jump(diagram, i):
+                diagram.check_digits(i)
+            else:
+                diagram.check_size(i)
+        except UserError:
+            return False
+        return True
+
+    if allowed(index):
+        return index
+    low, high = 0, index  # allowed at low, refused at high
+    while high - low > 1:
+        middle = (low + high) // 2
+        low, high = (middle, high) if allowed(middle) else (low, middle)
+    return low
+
+
+def state_from_session(session: Session, path: Path | None = None) -> ExplorerState:
+    """The state a session describes; a UserError only when its tower cannot be built."""
     tower = parse_spec(session.tower)
     diagram = Diagram(tower)
+    notices: list[str] = []
 
-    def place(mark: Mark, what: str) -> Place:
+    def place(mark: Mark) -> Place | None:
         try:
             index = tower.index_of(mark.level)
+            tower.check_index(index)
             return index, tower.parse(mark.label, index)
-        except UserError as exc:
-            raise UserError(f"{what} at level {format_level(mark.level)}: {exc}") from None
+        except UserError:
+            return None
 
-    index = tower.index_of(session.level)
-    node = None if session.node is None else place(Mark(session.level, session.node), "the current node")[1]
-    state = ExplorerState(diagram=diagram, index=index, node=node, view=session.view, path=path)
-    state.bookmarks = [place(m, "a bookmark") for m in session.bookmarks]
-    state.notes = {place(m, "a note"): text for m, text in session.notes.items()}
+    try:
+        index = tower.index_of(session.level)
+    except UserError:
+        index = 0
+        notices.append(f"{session.tower} has no level {format_level(session.level)}; opened at level 0")
+    allowed = deepest_allowed(diagram, index)
+    if allowed < index:
+        notices.append(
+            f"level {format_level(session.level)} is deeper than the explorer builds for {session.tower}; "
+            f"opened at level {format_level(tower.level_of(allowed))}"
+        )
+        index = allowed
+    node = None
+    if session.node is not None and not notices:
+        found = place(Mark(tower.level_of(index), session.node))
+        node = None if found is None else found[1]
+        if found is None:
+            notices.append(f"no node {session.node} at level {format_level(session.level)}; selected the first node")
+    state = ExplorerState(diagram=diagram, index=index, node=node, view=ViewSettings.from_dict(session.view), path=path)
+    for mark in session.bookmarks:
+        found = place(mark)
+        if found is None:
+            notices.append(f"dropped a bookmark on {mark.label} at level {format_level(mark.level)}: not in {session.tower}")
+        elif found not in state.bookmarks:
+            state.bookmarks.append(found)
+    for mark, text in session.notes.items():
+        found = place(mark)
+        if found is None:
+            notices.append(f"dropped a note on {mark.label} at level {format_level(mark.level)}: not in {session.tower}")
+        else:
+            state.notes[found] = text
+    # Anything dropped is a change the file does not have yet.
+    state.modified = any(n.startswith("dropped") for n in notices)
+    state.notices = notices
     return state
 
 

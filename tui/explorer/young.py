@@ -72,8 +72,32 @@ def draw_boxes(shape: Shape, cell: int = 1) -> list[str]:
     return lines
 
 
+def draw_bars(shape: Shape, max_width: int, max_height: int) -> list[str]:
+    """A diagram too large for boxes, compactly: one bar per row, scaled so the first row fits,
+    each followed by its length; runs of equal rows share one line (``×3``), and when there are
+    still too many lines the shortest rows are summed up on the last one."""
+    total, cols = sum(shape), shape[0]
+    runs: list[tuple[int, int]] = []
+    for part in shape:
+        if runs and runs[-1][0] == part:
+            runs[-1] = (part, runs[-1][1] + 1)
+        else:
+            runs.append((part, 1))
+    room = max(max_width - 8, 1)
+    lines = [f"{total} boxes, {len(shape)} rows" + (", bars to scale" if cols > room else "")]
+    limit = max(max_height - 1, 2)
+    shown = runs if len(runs) <= limit else runs[: limit - 1]
+    for part, times in shown:
+        bar = "█" * max(1, part * room // cols) if cols > room else "█" * part
+        lines.append(f"{bar} {part}" + (f"×{times}" if times > 1 else ""))
+    if len(shown) < len(runs):
+        rest = runs[len(shown):]
+        lines.append(f"… {sum(t for _, t in rest)} more rows, {sum(p * t for p, t in rest)} boxes")
+    return lines
+
+
 def draw_shape(shape: Shape, max_width: int, max_height: int) -> list[str]:
-    """The best drawing that fits: boxes 3 wide, boxes 1 wide, one mark per box, or a summary."""
+    """The best drawing that fits: boxes 3 wide, boxes 1 wide, one mark per box, or row bars."""
     if not shape:
         return ["∅ (the empty partition)"]
     rows, cols = len(shape), shape[0]
@@ -82,8 +106,7 @@ def draw_shape(shape: Shape, max_width: int, max_height: int) -> list[str]:
             return draw_boxes(shape, cell)
     if cols <= max_width and rows <= max_height:
         return ["▪" * part for part in shape]
-    row_word = "row" if rows == 1 else "rows"
-    return [f"{sum(shape)} boxes in {rows} {row_word}, {cols} wide: too large to draw here"]
+    return draw_bars(shape, max_width, max_height)
 
 
 def draw_label(label: str, max_width: int, max_height: int) -> list[str]:

@@ -29,10 +29,14 @@ class FindNode(ModalScreen[Any]):
         Binding("up", "pick(-1)", show=False, priority=True),
     ]
 
-    def __init__(self, diagram: Diagram, index: int, **kwargs: object) -> None:
+    def __init__(self, diagram: Diagram, index: int, nodes: list[Any] | None = None,
+                 multiplicity: dict[Any, int] | None = None, **kwargs: object) -> None:
         super().__init__(**kwargs)  # type: ignore[arg-type]
         self.diagram = diagram
         self.index = index
+        #: the level's nodes in display order (a level reached by a jump is not in the diagram)
+        self.nodes = diagram.nodes(index) if nodes is None else nodes
+        self.level = diagram.level(index) if multiplicity is None else multiplicity
         self._labels: list[str] | None = None
         self._found: list[Any] = []
 
@@ -55,25 +59,31 @@ class FindNode(ModalScreen[Any]):
         self._search("")
 
     def _search(self, query: str) -> None:
-        nodes = self.diagram.nodes(self.index)
+        nodes = self.nodes
         tower = self.diagram.tower
         found: list[Any] = []
         text = query.strip()
+        matches = len(nodes)
         if text:
+            exact = None
             try:  # the label as the tower reads it (accepts 3,1 and 3 1 for partitions)
                 node = tower.parse(text, self.index)
-                if self.diagram.multiplicity(self.index, node) > 0:
+                if self.level.get(node, 0) > 0:
+                    exact = node
                     found.append(node)
             except UserError:
                 pass
             if self._labels is None:
                 self._labels = [tower.format(n) for n in nodes]
             squeezed = text.replace(" ", "")
+            matches = 0
             for node, label in zip(nodes, self._labels):
-                if squeezed in label and node not in found:
-                    found.append(node)
-                    if len(found) >= MOST_SHOWN:
-                        break
+                if squeezed in label:
+                    matches += 1
+                    if node != exact and len(found) < MOST_SHOWN:
+                        found.append(node)
+            if exact is not None and squeezed not in tower.format(exact):
+                matches += 1
         else:
             found = list(nodes[:MOST_SHOWN])
         self._found = found
@@ -82,7 +92,13 @@ class FindNode(ModalScreen[Any]):
         if found:
             listing.highlighted = 0
         total = len(nodes)
-        status = f"{len(found)} shown of {total:,} nodes" if found else "no node on this level has that label"
+        if not found:
+            status = "no node on this level has that label"
+        elif not text:
+            status = f"{total:,} nodes on this level; type to narrow"
+        else:
+            word = "node matches" if matches == 1 else "nodes match"
+            status = f"{matches:,} {word} of {total:,}" + (f" (first {len(found)} listed)" if matches > len(found) else "")
         self.query_one("#find-status", Static).update(Text(status))
 
     @on(Input.Changed, "#find-input")

@@ -12,8 +12,11 @@ from textual.containers import Vertical
 from textual.screen import ModalScreen
 from textual.widgets import Input, Static
 
-#: a checker returns (error or None, a hint line shown under the field)
+#: a checker returns (error or None, a hint line shown under the field); an empty error refuses the
+#: value without a message (nothing typed yet)
 Checker = Callable[[str], tuple[str | None, str]]
+#: an acceptor does the work on Enter and returns the message of a failure (the dialog stays) or None
+Acceptor = Callable[[str], str | None]
 
 
 class Prompt(ModalScreen[str | None]):
@@ -22,8 +25,9 @@ class Prompt(ModalScreen[str | None]):
     BINDINGS = [Binding("escape", "dismiss_none", "cancel", key_display="Esc")]
 
     def __init__(self, title: str, question: str, value: str = "", check: Checker | None = None,
-                 placeholder: str = "", **kwargs: object) -> None:
+                 placeholder: str = "", accept: Acceptor | None = None, **kwargs: object) -> None:
         super().__init__(**kwargs)  # type: ignore[arg-type]
+        self.accept = accept
         self.title_text = title
         self.question = question
         self.value = value
@@ -48,7 +52,7 @@ class Prompt(ModalScreen[str | None]):
     def _show(self, value: str) -> str | None:
         error, hint = (None, "") if self.check is None else self.check(value)
         self.query_one("#prompt-hint", Static).update(Text(hint))
-        self.query_one("#prompt-error", Static).update(Text("" if error is None else f"✗ {error}"))
+        self.query_one("#prompt-error", Static).update(Text(f"✗ {error}" if error else ""))
         return error
 
     @on(Input.Changed, "#prompt-input")
@@ -57,8 +61,13 @@ class Prompt(ModalScreen[str | None]):
 
     @on(Input.Submitted, "#prompt-input")
     def _submitted(self, event: Input.Submitted) -> None:
-        if self._show(event.value) is None:
+        if self._show(event.value) is not None:
+            return
+        failure = None if self.accept is None else self.accept(event.value)
+        if failure is None:
             self.dismiss(event.value)
+        else:
+            self.query_one("#prompt-error", Static).update(Text(f"✗ {failure}"))
 
     def action_dismiss_none(self) -> None:
         self.dismiss(None)

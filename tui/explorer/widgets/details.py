@@ -44,8 +44,13 @@ def _neighbours(text: Text, title: str, level: str | None, items: list[tuple[str
         text.append(line.rstrip() + "\n")
 
 
-def details_text(info: NodeDetails | None, width: int, height: int) -> Text:
-    """The pane's text for ``info`` at ``width`` cells (``height`` bounds the diagram drawing)."""
+#: lines of a closed form shown while it is folded
+FOLDED_LINES = 3
+
+
+def details_text(info: NodeDetails | None, width: int, height: int, unfold: bool = False) -> Text:
+    """The pane's text for ``info`` at ``width`` cells (``height`` bounds the diagram drawing); a
+    closed form longer than FOLDED_LINES lines is folded unless ``unfold``."""
     width = max(width, 12)
     text = Text(no_wrap=False, overflow="fold")
     if info is None:
@@ -65,7 +70,13 @@ def details_text(info: NodeDetails | None, width: int, height: int) -> Text:
         text.append(" " + line + "\n")
     if info.formula:
         text.append("in k ", style="bold")
-        text.append(info.formula + "\n")
+        formula = info.formula
+        room = max(width * FOLDED_LINES - 5, 10)
+        if not unfold and len(formula) > room:
+            text.append(formula[:room] + "…\n")
+            text.append(" (z unfolds)\n", style="italic")
+        else:
+            text.append(formula + "\n")
     _neighbours(text, "parents", info.parent_level, info.parents, width)
     _neighbours(text, "children", info.child_level, info.children, width)
     drawing = draw_label(info.label, width, max(height // 2, 5))
@@ -78,11 +89,12 @@ def details_text(info: NodeDetails | None, width: int, height: int) -> Text:
 
 
 class DetailsPane(VerticalScroll, can_focus=False):
-    """A scrolling pane holding the details text."""
+    """A scrolling pane holding the details text (scrolled by the [ and ] keys of the main screen)."""
 
     def __init__(self, **kwargs: object) -> None:
         super().__init__(**kwargs)  # type: ignore[arg-type]
         self.info: NodeDetails | None = None
+        self.unfold = False
 
     def compose(self) -> ComposeResult:
         yield Static(id="details-text")
@@ -97,4 +109,4 @@ class DetailsPane(VerticalScroll, can_focus=False):
     def _redraw(self) -> None:
         width = self.scrollable_content_region.width or 26
         height = self.scrollable_content_region.height or 20
-        self.query_one("#details-text", Static).update(details_text(self.info, width - 1, height))
+        self.query_one("#details-text", Static).update(details_text(self.info, width - 1, height, self.unfold))
