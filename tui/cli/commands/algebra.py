@@ -1,0 +1,48 @@
+"""``towerscope algebra``: the level's diagram algebra, its basis size and the rank of its image."""
+
+from __future__ import annotations
+
+import argparse
+import sys
+
+from tui.cli.support import DelayedProgress, level_index, print_json
+
+
+def add_commands(sub: argparse._SubParsersAction) -> None:
+    p = sub.add_parser(
+        "algebra",
+        help="a level's diagram algebra: basis size, rank of its image on the tensor space, kernel size",
+        description="Name the diagram algebra of a level, count its basis diagrams and compute the dimension "
+        "of its image in End(V^(⊗k)) by exact linear algebra on the tensor space (ranks modulo large primes, "
+        "proved equal to the sum of squared multiplicities of the level). Where the matrices would be too "
+        "large, the rank is taken from the Bratteli diagram and the output says so.",
+    )
+    p.add_argument("spec", help="a tower spec with a diagram algebra, e.g. symmetric:n=3")
+    p.add_argument("--level", required=True, metavar="L", help="the level (3, 2.5, 5/2, 2+1/2)")
+    p.add_argument("--json", action="store_true", help="one JSON object")
+    p.set_defaults(handler=run_algebra)
+
+
+def run_algebra(args: argparse.Namespace) -> int:
+    from engine.export.kernel_documents import algebra_document
+    from engine.specs import parse_spec
+
+    tower = parse_spec(args.spec)
+    index = level_index(tower, args.level)
+    document = DelayedProgress(f"acting on the tensor space of {tower.spec}").run(
+        lambda bar: algebra_document(tower, index, bar))
+    if args.json:
+        print_json(document)
+        return 0
+    out = sys.stdout
+    parameter = "none" if document["parameter"] is None else str(document["parameter"])
+    out.write(f"{document['algebra']} at level {document['level']} of {tower.spec} (parameter {parameter})\n")
+    out.write(f"  basis diagrams        {document['basis']}\n")
+    if document["rank_method"] == "computed":
+        out.write(f"  rank of the image     {document['rank']}   computed on the tensor space "
+                  f"(equals Σm² = {document['squares']})\n")
+    else:
+        out.write(f"  rank of the image     {document['rank']}   from the Bratteli diagram (Σm²), not computed: "
+                  f"{document['note']}\n")
+    out.write(f"  kernel                {document['kernel']}\n")
+    return 0
