@@ -6,8 +6,11 @@ from __future__ import annotations
 from abc import ABC, abstractmethod
 from typing import Any
 
-from engine.paths import Path
+from engine.paths import Path, PathError
 from engine.tower import Tower
+
+#: characters of a path written as text (a path to a level one can list is far shorter)
+MAX_PATH_TEXT = 200_000
 
 
 class Encoding(ABC):
@@ -49,4 +52,6 @@ class Encoding(ABC):
         return self.text(tower, self.encode(tower, path))
 
     def path_from_text(self, tower: Tower, text: str) -> Path:
+        if len(text) > MAX_PATH_TEXT:
+            raise PathError(f"a path written in {len(text):,} characters is too long to read (at most {MAX_PATH_TEXT:,})")
         return self.decode(tower, self.read(tower, text))

@@ -185,11 +185,12 @@ _TOWER = parse_spec("symmetric:n=4")
 
 
 @FUZZ
-@given(any_text, st.sampled_from(["labels", "tableau", "vacillating"]))
-def test_paths_as_text(text, name):
-    encoding = answers_or_one_line(lambda n: get_encoding(_TOWER, n), name)
-    if encoding is not None:
-        answers_or_one_line(lambda t: encoding.path_from_text(_TOWER, t), text)
+@given(any_text, st.sampled_from([("symmetric:n=4", "labels"), ("symmetric:n=4", "vacillating"),
+                                   ("symmetric:n=4", "updown"), ("general-linear:n=3", "tableau")]))
+def test_paths_as_text(text, choice):
+    tower = parse_spec(choice[0])
+    encoding = get_encoding(tower, choice[1])
+    answers_or_one_line(lambda t: encoding.path_from_text(tower, t), text)
 
 
 @FUZZ
