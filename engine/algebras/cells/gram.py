@@ -55,6 +55,8 @@ class GramMatrix:
     size: int
     rows: list[list[tuple[int, int, Fraction]]]
     gamma: list[Fraction]
+    #: the cell module it came from (for the reflection split of ``symmetry``), if any
+    module: CellModule | None = None
 
     @classmethod
     def of(cls, module: CellModule, cancel: Callable[[], bool] | None = None) -> "GramMatrix":
@@ -75,7 +77,7 @@ class GramMatrix:
                         if m[u][w]:
                             row.append((j * f + w, c, m[u][w]))
         gamma = list(module.specht_form) * n
-        return cls(n * f, rows, gamma)
+        return cls(n * f, rows, gamma, module)
 
     @cached_property
     def degree_bound(self) -> int:
@@ -126,6 +128,17 @@ class GramMatrix:
 
         if self.size == 0:
             return [1]
+        from engine.algebras.cells import symmetry
+
+        if self.module is not None and symmetry.reflection_applies(self.module):
+            plus, minus, pairs = symmetry.split(self.module, self)
+            import flint
+
+            product = flint.fmpz_poly(plus.determinant(cancel)) * flint.fmpz_poly(minus.determinant(cancel))
+            quotient, remainder = divmod(product, flint.fmpz_poly([4**pairs]))
+            assert remainder == 0, "the reflection split must divide exactly"
+            out = [int(c) for c in quotient.coeffs()] or [0]
+            return out
         degree = self.degree_bound
         bound = 4 * self.coefficient_bound_squared()  # (2H)²
         modulus = 1
@@ -148,12 +161,26 @@ class GramMatrix:
             out.pop()
         return out
 
-    def _determinant_mod(self, p: int, degree: int, flint) -> list[int]:
-        by_power: dict[int, list[list[int]]] = {}
+    @cached_property
+    def _by_power(self) -> dict[int, list[tuple[int, int, int, int]]]:
+        """c → the entries (i, j, numerator, denominator) of x^c."""
+        out: dict[int, list[tuple[int, int, int, int]]] = {}
         for i, row in enumerate(self.rows):
             for j, c, q in row:
-                dense = by_power.setdefault(c, [[0] * self.size for _ in range(self.size)])
-                dense[i][j] = (dense[i][j] + q.numerator * pow(q.denominator, -1, p)) % p
+                out.setdefault(c, []).append((i, j, q.numerator, q.denominator))
+        return out
+
+    def _determinant_mod(self, p: int, degree: int, flint) -> list[int]:
+        inverses: dict[int, int] = {1: 1}
+        by_power: dict[int, list[list[int]]] = {}
+        for c, entries in self._by_power.items():
+            dense = [[0] * self.size for _ in range(self.size)]
+            for i, j, num, den in entries:
+                inv = inverses.get(den)
+                if inv is None:
+                    inv = inverses[den] = pow(den, -1, p)
+                dense[i][j] = (dense[i][j] + num * inv) % p
+            by_power[c] = dense
         powers = sorted(by_power)
         matrices = [flint.nmod_mat(by_power[c], p) for c in powers]
         values = []
