@@ -27,7 +27,8 @@ _UMASK_LOCK = threading.Lock()
 
 
 def _cannot_write(target: Path, exc: OSError) -> UserError:
-    return UserError(f"cannot write {str(target)!r}: {exc.strerror or exc}")
+    shown = str(target) if len(str(target)) <= 200 else f"{str(target)[:100]}… ({len(str(target)):,} characters)"
+    return UserError(f"cannot write {shown!r}: {exc.strerror or exc}")
 
 
 def _kind(mode: int) -> str:
@@ -85,8 +86,17 @@ def clean_leftovers(folder: Path) -> list[Path]:
 
 def resolve_target(path: str | os.PathLike[str]) -> Path:
     """The regular file a write to ``path`` replaces: symlinks followed; a UserError for a missing
-    folder, a folder, a FIFO, a device or a socket."""
+    folder, a folder, a FIFO, a device or a socket, a name too long or holding a NUL byte."""
     given = Path(path)
+    if "\x00" in str(given):
+        raise UserError("cannot write a file whose name holds a NUL byte")
+    try:
+        return _resolve(given)
+    except OSError as exc:  # a name too long, a folder we may not search
+        raise _cannot_write(given, exc) from None
+
+
+def _resolve(given: Path) -> Path:
     target = Path(os.path.realpath(given)) if given.is_symlink() else given
     folder = target.parent if str(target.parent) else Path(".")
     if not folder.is_dir():
