@@ -62,6 +62,25 @@ def resolve(text: str) -> Path:
 
 def check_save_path(text: str) -> tuple[str | None, str]:
     """For the save prompt: (error or None, the full path that will be written)."""
+    try:
+        return _check_save_path(text)
+    except (OSError, ValueError) as exc:  # a name too long, a NUL byte, a folder we may not read
+        return f"not a usable file name ({_why(exc)})", ""
+
+
+def check_open_path(text: str) -> tuple[str | None, str]:
+    """For the open prompt: (error or None, the full path that will be read)."""
+    try:
+        return _check_open_path(text)
+    except (OSError, ValueError) as exc:
+        return f"not a usable file name ({_why(exc)})", ""
+
+
+def _why(exc: Exception) -> str:
+    return exc.strerror if isinstance(exc, OSError) and exc.strerror else str(exc)[:80]
+
+
+def _check_save_path(text: str) -> tuple[str | None, str]:
     if not text.strip():
         return "type a file name, e.g. my-session.json", ""
     path = resolve(text)
@@ -75,8 +94,7 @@ def check_save_path(text: str) -> tuple[str | None, str]:
     return None, hint
 
 
-def check_open_path(text: str) -> tuple[str | None, str]:
-    """For the open prompt: (error or None, the full path that will be read)."""
+def _check_open_path(text: str) -> tuple[str | None, str]:
     if not text.strip():
         return "", f"folder: {default_folder()}"
     path = resolve(text)
