@@ -172,17 +172,45 @@ class MatrixTower(Tower):
     def format(self, node: Hashable) -> str:
         return self._labels[node]
 
+    #: other spellings accepted on input (e.g. a node's former name) → the label
+    label_aliases: dict[str, str] = {}
+
     def parse(self, text: str, index: int) -> Hashable:
         label = self.normalize_label(text.strip())
         nodes = self.node_set(index)
+        if label == "trivial" and label not in nodes.labels and self._root in self._order[self.step_key(index)]:
+            return self._root  # the root is the trivial module of its node set
         if label not in nodes.labels:
-            shown = ", ".join(nodes.labels[:12]) + (", ..." if len(nodes.labels) > 12 else "")
-            raise self.label_error(text, index, f"one of {shown}")
+            at = self.labels_at(index)
+            if len(at) <= 12:
+                raise self.label_error(text, index, f"one of {', '.join(at)}", listed=True)
+            raise self.label_error(text, index, f"one of its {len(at)} nodes, e.g. {', '.join(at[:6])}")
         return nodes.node(nodes.index(label))
 
     def normalize_label(self, text: str) -> str:
-        """Hook for subclasses that accept several spellings of a label."""
-        return text
+        """Other spellings of a label (``label_aliases``); subclasses may accept more."""
+        return self.label_aliases.get(text, text)
+
+    def labels_at(self, index: int) -> list[str]:
+        """The labels of the nodes with a path from the root at level ``index``, in display order:
+        the reachable sets repeat with the pattern, so a cycle of them is found and skipped."""
+        period = len(self.pattern)
+        current = frozenset([self._root])
+        seen: dict[tuple[int, frozenset], int] = {}
+        i = 0
+        while i < index:
+            state = (i % period, current)
+            if state in seen:
+                left = (index - i) % (i - seen[state])
+                index = i + left
+                seen = {}
+                if not left:
+                    break
+            seen[(i % period, current)] = i
+            current = frozenset(c for n in current for c, _ in self._edges[i % period][n])
+            i += 1
+        order = self._order[self.step_key(index)]
+        return [self._labels[n] for n in sorted(current, key=lambda n: order.get(n, 0))]
 
     def sort_key(self, node: Hashable, index: int = 0) -> object:
         return self._order[index % len(self.pattern)].get(node, 0)

@@ -142,13 +142,15 @@ class Tower(ABC):
         key = self.sort_key
         return sorted(nodes, key=lambda node: key(node, index))
 
-    def label_error(self, text: str, index: int, expected: str) -> LabelError:
+    def label_error(self, text: str, index: int, expected: str, listed: bool = False) -> LabelError:
+        """The one-line error for a label that names no node at the level; unless ``expected``
+        already lists the level's nodes (``listed``), it says how to list them."""
         from engine.levels import format_level
+        from engine.numbers_in import quote
 
-        return LabelError(
-            f"{text!r} is not a node of {self.spec} at level {format_level(self.level_of(index))} "
-            f"(expected {expected})"
-        )
+        level = format_level(self.level_of(index))
+        hint = "" if listed else f"; `towerscope levels {self.spec} --at {level}` lists the nodes there"
+        return LabelError(f"{quote(text, 60)} is not a node of {self.spec} at level {level} (expected {expected}){hint}")
 
     def read_label(
         self, text: str, index: int, expected: str, read: Callable[[str], T], fits: Callable[[T], bool]
