@@ -102,13 +102,13 @@ def mutate(rng: random.Random, text: str) -> str:
             text = text[:pos] + text[end:]
         elif kind == 2 and text:
             end = min(len(text), pos + rng.randint(1, 8))
-            text = text[:pos] + text[pos:end] * rng.choice([2, 10, 100, 1000, 10**4, 10**5]) + text[end:]
+            text = text[:pos] + text[pos:end] * rng.choice([2, 10, 100, 1000, 10**4, 3 * 10**4]) + text[end:]
         elif kind == 3:
             depth = rng.choice([10, 100, 1000, 10**4])
             opener, closer = rng.choice([("(", ")"), ("[", "]"), ("{", "}"), ("-", ""), ("sqrt(", ")")])
             text = opener * depth + text + closer * depth
         elif kind == 4:
-            text = text[:pos] + "9" * rng.choice([20, 400, 5000, 10**5, 10**6]) + text[pos:]
+            text = text[:pos] + "9" * rng.choice([20, 400, 5000, 10**5, 2 * 10**5]) + text[pos:]
         elif kind == 5:
             text = text[:pos] + rng.choice(["^", "**", "e", "*10^"]) + str(rng.choice([9, 99, 10**4, 10**9, 10**99])) + text[pos:]
         elif kind == 6 and text:
@@ -208,23 +208,40 @@ def _check_message(exc: BaseException) -> None:
 
 
 _PARSERS = None
+_INIT_ERROR = ""
 
 
 def _init() -> None:
-    global _PARSERS
-    resource.setrlimit(resource.RLIMIT_AS, (MEMORY_CAP, MEMORY_CAP))
-    sys.set_int_max_str_digits(0)  # as the CLI and the explorer run
-    signal.signal(signal.SIGALRM, _alarm)
-    _PARSERS = _parsers()
+    global _PARSERS, _INIT_ERROR
+    try:
+        sys.set_int_max_str_digits(0)  # as the CLI and the explorer run
+        signal.signal(signal.SIGALRM, _alarm)
+        _PARSERS = _parsers()  # imports first: the cap is for the inputs, not for the modules
+        resource.setrlimit(resource.RLIMIT_AS, (MEMORY_CAP, MEMORY_CAP))
+    except Exception as exc:  # noqa: BLE001 - reported by the first chunk, never a respawn loop
+        _INIT_ERROR = f"{type(exc).__name__}: {exc}"
 
 
-def _run_chunk(job: tuple[str, list[str]]) -> list[tuple[str, float, str]]:
+def inputs_for(name: str, seed: int, start: int, stop: int) -> list[str]:
+    """Inputs start..stop-1 of a parser: the seeds first, then mutations (each from its own
+    generator, so a worker makes them without the parent holding them all)."""
+    seeds = SEEDS[name]
+    out = []
+    for i in range(start, stop):
+        rng = random.Random(f"{seed}:{name}:{i}")
+        out.append(seeds[i] if i < len(seeds) else mutate(rng, rng.choice(seeds)))
+    return out
+
+
+def _run_chunk(job: tuple[str, int, int, int]) -> list[tuple[str, float, str]]:
     from engine.errors import UserError
 
-    name, inputs = job
+    name, seed, first, stop = job
+    if _PARSERS is None:
+        return [(f"traceback:worker could not start: {_INIT_ERROR}", 0.0, "")] * (stop - first)
     parse = _PARSERS[name]
     out = []
-    for text in inputs:
+    for text in inputs_for(name, seed, first, stop):
         start = time.perf_counter()
         signal.alarm(TIME_CAP)
         try:
@@ -252,19 +269,16 @@ def main() -> None:
     count = int(sys.argv[1]) if len(sys.argv) > 1 else 10_000
     seed = int(sys.argv[2]) if len(sys.argv) > 2 else 1
     chosen = sys.argv[3].split(",") if len(sys.argv) > 3 else list(SEEDS)
-    rng = random.Random(seed)
     print(f"fuzzing {len(chosen)} parsers, {count:,} inputs each (seed {seed}; caps {TIME_CAP} s and "
           f"{MEMORY_CAP // 1024**3} GB per input)")
     totals = {"tried": 0, "traceback": 0, "hang": 0, "memory": 0}
     with multiprocessing.get_context("fork").Pool(1, initializer=_init, maxtasksperchild=20) as pool:
         for name in chosen:
-            seeds = SEEDS[name]
-            inputs = [rng.choice(seeds) if i < len(seeds) else mutate(rng, rng.choice(seeds)) for i in range(count)]
             started = time.perf_counter()
             tally: dict[str, int] = {"answer": 0, "refusal": 0, "traceback": 0, "hang": 0, "memory": 0}
             slowest = (0.0, "")
             seen: dict[str, str] = {}
-            chunks = [(name, inputs[i:i + CHUNK]) for i in range(0, len(inputs), CHUNK)]
+            chunks = [(name, seed, i, min(count, i + CHUNK)) for i in range(0, count, CHUNK)]
             for result in pool.imap(_run_chunk, chunks):
                 for outcome, seconds, text in result:
                     kind = outcome.split(":", 1)[0]
