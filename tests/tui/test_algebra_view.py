@@ -53,7 +53,9 @@ async def test_the_algebra_view_of_p3_at_3() -> None:
         # the kernel: its dimension
         await pilot.press("k")
         await settle(pilot)
-        assert f"dimension {203 - squares}" in text(app, "#algebra-kernel")
+        kernel = text(app, "#algebra-kernel")
+        assert f"dimension {203 - squares}" in kernel
+        assert "generator: the orbit-basis element" in kernel and "= the kernel's dimension ✓" in kernel
         # the cell modules: ranks at N agree with the tower
         await pilot.press("c")
         await settle(pilot)

@@ -325,28 +325,29 @@ def kernel_text(diagram: Diagram, index: int, width: int, cancel) -> str:
     lines = [f"kernel of the action: dimension {found.dimension:,}"]
     for element in found.elements:
         lines.append("  " + _fold(format_element(element, algebra), width - 2))
-    lines += generator_lines(algebra, squares, cancel)
+    lines += generator_lines(algebra, found.dimension, width, cancel)
     return "\n".join(lines)
 
 
-def generator_lines(algebra: AlgebraLevel, squares: int, cancel) -> list[str]:
-    """The family's known generator of the kernel, where there is one (engine.algebras.generators)."""
-    try:
-        from engine.algebras import generators
-    except ImportError:
+def generator_lines(algebra: AlgebraLevel, kernel_dimension: int, width: int, cancel) -> list[str]:
+    """The family's known generator of the kernel (engine.algebras.generators) in both bases, and the
+    dimension of the two-sided ideal it generates, computed."""
+    from engine.algebras.elements import format_element
+    from engine.algebras.generators import known_generator
+    from engine.algebras.ideal import ideal_dimension
+
+    if kernel_dimension == 0:
         return []
-    known = getattr(generators, "known_generator", None)
-    if known is None:
-        return []
-    found = known(algebra)
+    found = known_generator(algebra)
     if found is None:
         return ["no generator of the kernel is known for this algebra"]
-    from engine.algebras.elements import format_element
-
-    lines = [f"generator: {format_element(found, algebra)}"]
-    ideal = getattr(generators, "ideal_dimension", None)
-    if ideal is not None:
-        lines.append(f"  the two-sided ideal it generates has dimension {ideal(found, algebra):,}")
+    lines = [f"generator: {found.description}", "  " + _fold(format_element(found.element, algebra), width - 2)]
+    if found.orbit is not None:
+        lines.append("  in the orbit basis: " + _fold(format_element(found.orbit, algebra), width - 22))
+    ideal = ideal_dimension(found.element, algebra, kernel_dimension, cancel)
+    proved = "" if ideal.proved else " at least"
+    same = "  = the kernel's dimension ✓" if ideal.dimension == kernel_dimension else ""
+    lines.append(f"  the two-sided ideal it generates has dimension{proved} {ideal.dimension:,}{same}")
     return lines
 
 
