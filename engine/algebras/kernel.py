@@ -265,3 +265,27 @@ def in_kernel(element: dict[Blocks, int], level: AlgebraLevel) -> bool:
 
 
 __all__ = ["image_rank", "kernel_elements", "in_kernel", "stack_entries", "RankReport", "KernelReport", "crt"]
+
+
+def orbit_kernel_elements(level: AlgebraLevel, how_many: int = 20) -> list[dict[Blocks, int]]:
+    """The first ``how_many`` orbit-basis elements x_π (in rank order) with more than n blocks, each
+    checked to act as zero (converted to the diagram basis by Möbius inversion, its matrix computed).
+
+    x_π acts on the basis tensors whose pattern of equal labels is exactly π (the 2005 survey of
+    partition algebras, §4), so it acts as zero exactly when π has more than n blocks; with the
+    computed rank this gives the kernel's dimension as a count (the tests hold the two together)."""
+    from engine.algebras.orbit import from_orbit
+
+    if level.kind != "partition":
+        raise UserError(f"{level.name} has no orbit basis (the orbit basis belongs to the partition algebras)")
+    out: list[dict[Blocks, int]] = []
+    if how_many <= 0:
+        return out
+    for d in iter_basis(level):
+        if len(d) > level.n:
+            if not acts_as_zero(from_orbit({d: 1}, level), level):
+                raise AssertionError(f"the orbit element of {d} does not act as zero")
+            out.append({d: 1})
+            if len(out) == how_many:
+                break
+    return out

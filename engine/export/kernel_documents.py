@@ -5,7 +5,8 @@
 (the contract's fields) plus ``"squares"`` (Σm² of the level, the proven upper bound) and
 ``"note"`` (why the rank is Σm² when ``rank_method`` is ``"bratteli"``, else "").
 
-``kernel``: ``{"tower", "level", "algebra", "dimension", "elements"}`` and, where the level's algebra
+``kernel``: ``{"tower", "level", "algebra", "dimension", "elements"}`` (with ``basis="orbit"``, partition
+algebras: the elements are orbit-basis elements x_π with more than n blocks, and ``"basis": "orbit"``) and, where the level's algebra
 has a known generator (``engine.algebras.generators``), ``"generator"`` (an element in the diagram
 basis), ``"generator_orbit"`` (the same in the orbit basis, partition algebras; else null),
 ``"generator_acts_as_zero"``, ``"ideal_dimension"`` (computed; null when the computation is refused
@@ -82,20 +83,28 @@ def _acts_as_zero(element, level) -> bool | None:
 
 
 def kernel_document(tower: "Tower", index: int, how_many: int = 20, test: str | None = None,
-                    progress=None) -> dict[str, Any]:
+                    progress=None, basis: str = "diagram") -> dict[str, Any]:
     from engine.algebras.generators import known_generator
-    from engine.algebras.kernel import kernel_elements
+    from engine.algebras.kernel import kernel_elements, orbit_kernel_elements
 
+    if basis not in ("diagram", "orbit"):
+        raise UserError(f"unknown basis {basis!r}: use diagram or orbit")
     level = algebra_at(tower, index)
     upper = squares_at(tower, index)
-    found = kernel_elements(level, upper, how_many, progress)
+    orbit = basis == "orbit"
+    if orbit and level.kind != "partition":
+        raise UserError(f"{level.name} has no orbit basis (the orbit basis belongs to the partition algebras)")
+    found = kernel_elements(level, upper, 0 if orbit else how_many, progress)
+    elements = orbit_kernel_elements(level, min(how_many, found.dimension)) if orbit else found.elements
     document: dict[str, Any] = {
         "tower": tower.spec,
         "level": level_to_json(tower.level_of(index)),
         "algebra": level.name,
         "dimension": found.dimension,
-        "elements": [element_json(e, level) for e in found.elements],
+        "elements": [element_json(e, level) for e in elements],
     }
+    if orbit:
+        document["basis"] = "orbit"
     generator = known_generator(level) if found.dimension else None
     if generator is not None:
         ideal, proved, note = _ideal(generator.element, level, found.dimension)

@@ -98,3 +98,11 @@ def test_errors_exit_2_with_one_line(args, words):
     done = run_process(*args)
     assert done.returncode == 2, done.stderr
     assert words in done.stderr and "Traceback" not in done.stderr and len(done.stderr.strip().splitlines()) == 1
+
+
+def test_kernel_in_the_orbit_basis(run_json):
+    # the 2005 survey of partition algebras, §4: the x_π with more than n blocks span the kernel;
+    # in P_2(2) there are Bell(4) − 8 = 7 of them (sympy Stirling numbers: S(4,1) + S(4,2) = 8)
+    doc = run_json("kernel", "symmetric:n=2", "--level", "2", "--basis", "orbit", "--count", "100")
+    assert doc["basis"] == "orbit" and doc["dimension"] == 7 and len(doc["elements"]) == 7
+    assert all(len(e["terms"]) == 1 and e["terms"][0]["diagram"].count("{") > 2 for e in doc["elements"])

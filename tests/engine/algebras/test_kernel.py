@@ -145,3 +145,20 @@ def test_rational_reconstruction():
     p = PRIMES[0]
     assert rational(-3 * pow(7, -1, p) % p, p) == (-3, 7)
     assert primitive([(1, 2), (-1, 3), (0, 1)]) == [3, -2, 0]
+
+
+@pytest.mark.parametrize("n,index", [(2, 4), (3, 6), (2, 5), (1, 4)])
+def test_orbit_basis_kernel_count_and_zero_action(n, index):
+    # the 2005 survey of partition algebras, §4: x_π acts as zero exactly when π has more than n blocks,
+    # so the kernel's dimension (computed from the rank) is the number of such π
+    from engine.algebras.kernel import orbit_kernel_elements
+    from engine.algebras.orbit import from_orbit
+
+    level, squares = setup(f"symmetric:n={n}", index)
+    dim = kernel_elements(level, squares, 0).dimension
+    assert dim == sum(1 for d in iter_basis(level) if len(d) > n)
+    listed = orbit_kernel_elements(level, 5)
+    assert len(listed) == min(5, dim)
+    for element in listed:
+        (d, c), = element.items()
+        assert c == 1 and len(d) > n and acts_as_zero(from_orbit(element, level), level)

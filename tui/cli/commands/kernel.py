@@ -21,6 +21,8 @@ def add_commands(sub: argparse._SubParsersAction) -> None:
     p.add_argument("--level", required=True, metavar="L", help="the level (3, 2.5, 5/2, 2+1/2)")
     p.add_argument("--count", type=int, default=20, metavar="C", help="how many kernel elements (default 20)")
     p.add_argument("--element", metavar="E", help="an element to test: does it act as zero, what ideal does it generate")
+    p.add_argument("--basis", choices=("diagram", "orbit"), default="diagram",
+                   help="write the kernel elements in this basis (orbit: partition algebras, the x_π with more than N blocks)")
     p.add_argument("--json", action="store_true", help="one JSON object")
     p.set_defaults(handler=run_kernel)
 
@@ -41,7 +43,7 @@ def run_kernel(args: argparse.Namespace) -> int:
     tower = parse_spec(args.spec)
     index = level_index(tower, args.level)
     document = DelayedProgress(f"computing the kernel at level {args.level} of {tower.spec}").run(
-        lambda bar: kernel_document(tower, index, args.count, args.element, bar))
+        lambda bar: kernel_document(tower, index, args.count, args.element, bar, args.basis))
     if args.json:
         print_json(document)
         return 0
@@ -55,7 +57,8 @@ def run_kernel(args: argparse.Namespace) -> int:
     shown = document["elements"]
     out.write(f"kernel of {document['algebra']} on the tensor space ({tower.spec}, level {document['level']}): "
               f"dimension {document['dimension']}")
-    out.write(f"; the first {len(shown)} basis elements\n" if shown else "\n")
+    where = " (orbit basis)" if document.get("basis") == "orbit" else ""
+    out.write(f"; the first {len(shown)} basis elements{where}\n" if shown else "\n")
     for i, element in enumerate(shown, 1):
         out.write(f"{i:>3}. {text(element)}\n")
     if "generator" in document:
