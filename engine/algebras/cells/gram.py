@@ -63,19 +63,23 @@ class GramMatrix:
         f = module.specht_size
         n = len(module.halves)
         rows: list[list[tuple[int, int, Fraction]]] = [[] for _ in range(n * f)]
+        halves = module.halves
         for i in range(n):
             if cancel is not None and cancel():
                 raise Cancelled()
-            for j in range(n):
-                block = module.form_block(i, j)
-                if block is None:
+            for j in range(i, n):
+                found = module.pair(halves[i], halves[j])
+                if found is None:
                     continue
-                c, m = block
-                for u in range(f):
-                    row = rows[i * f + u]
-                    for w in range(f):
-                        if m[u][w]:
-                            row.append((j * f + w, c, m[u][w]))
+                c, perms = found
+                inverse = tuple(tuple(sorted(range(len(p)), key=p.__getitem__)) for p in perms)
+                for a, b, sigma in ((i, j, perms), (j, i, inverse)) if i != j else ((i, j, perms),):
+                    m = module.specht_matrix(sigma)
+                    for u in range(f):
+                        row = rows[a * f + u]
+                        for w in range(f):
+                            if m[u][w]:
+                                row.append((b * f + w, c, m[u][w]))
         gamma = list(module.specht_form) * n
         return cls(n * f, rows, gamma, module)
 
