@@ -32,6 +32,8 @@ from engine.errors import Cancelled, TooLarge
 PAIR_LIMIT = 50_000
 #: the largest upper bound (ideal dimension) the closure by generators is run to
 CLOSURE_LIMIT = 700
+#: the largest (upper bound × terms of the element) for the closure (about 10 s of work)
+CLOSURE_WORK = 15_000
 
 
 @dataclass(frozen=True)
@@ -105,9 +107,10 @@ def ideal_dimension(element: dict[Blocks, int], level: AlgebraLevel, upper: int 
             if best >= bound:
                 break
         return IdealReport(best, True, made)
-    if bound > CLOSURE_LIMIT:
-        raise TooLarge(f"the ideal of {level.name} would be closed up to dimension {bound:,} by sparse "
-                       f"elimination (the limit is {CLOSURE_LIMIT:,})")
+    if bound > CLOSURE_LIMIT or bound * terms > CLOSURE_WORK:
+        raise TooLarge(f"the ideal of {level.name} would be closed up to dimension {bound:,} from an element of "
+                       f"{terms:,} terms by sparse elimination (the limits are {CLOSURE_LIMIT:,} and "
+                       f"{CLOSURE_WORK:,} for dimension × terms)")
     gens = local_generators(level)
     basis = Echelon(PRIMES[0])
     queue = [element]
