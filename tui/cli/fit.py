@@ -238,5 +238,25 @@ class Table:
         return "\n".join(out)
 
 
+def wrap_words(line: str, width: int | None = None, indent: str = "  ") -> str:
+    """One line of prose or a list, broken only at spaces to fit ``width`` (continuations start with
+    ``indent``), so that no number or label is ever split; ends with a newline."""
+    import re
+
+    width = output_width() if width is None else width
+    text = line.rstrip("\n")
+    lead = text[: len(text) - len(text.lstrip(" "))]
+    lines: list[str] = []
+    current = lead
+    for sep, word in re.findall(r"(\s*)(\S+)", text[len(lead):]):
+        if current.strip() and len(current) + len(sep) + len(word) > width:
+            lines.append(current)
+            current = indent + word
+        else:
+            current += sep + word
+    lines.append(current)
+    return "\n".join(lines) + "\n"
+
+
 def write(text: str, stream: TextIO | None = None) -> None:
     (stream or sys.stdout).write(text)

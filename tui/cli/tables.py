@@ -99,4 +99,4 @@ def print_families(found: Sequence[Any]) -> None:
         keys = ", ".join(f"{k}{'' if k in f.required else '?'}" for k in f.keys)
         table.add_row(f.name, keys, f.summary)
     _out(table.render(output_width()))
-    _out("Keys marked ? are optional. `towerscope families --json` gives each key's meaning.\n")
+    _out("Keys marked ? are optional. Each key's meaning: `towerscope families --json`.\n")

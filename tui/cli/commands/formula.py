@@ -36,7 +36,11 @@ def run(args: argparse.Namespace) -> int:
         print_json(document)
         return 0
     values = document["values"]
-    out = sys.stdout
+    from tui.cli.fit import wrap_words
+
+    class out:  # every line fitted to the width, broken only at spaces (never inside a number)
+        write = staticmethod(lambda text: sys.stdout.write(wrap_words(text, indent="    ")))
+
     out.write(f"{form.name()} on {tower.spec}, for every k ≥ 0 (S = Stirling numbers of the second kind):\n")
     out.write(f"  = {form.stirling_text()}\n")
     out.write(f"  = {form.powers_text()}" + ("   (0^k is 1 at k = 0, else 0)" if 0 in form.powers else "") + "\n")

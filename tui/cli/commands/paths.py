@@ -79,13 +79,15 @@ def run_paths(args: argparse.Namespace) -> int:
     tower = paths.diagram.tower
     shown = document["paths"]
     last = start + len(shown) - 1
+    from tui.cli.fit import wrap_words
+
     out = sys.stdout
     listed = f"ranks {start}..{last} as {encoding.title} ({encoding.name})" if shown else "none listed (--count 0)"
-    out.write(f"{total} paths to {tower.format(node)} at level {document['level']} of {tower.spec}; {listed}\n")
+    out.write(wrap_words(f"{total} paths to {tower.format(node)} at level {document['level']} of {tower.spec}; {listed}"))
     width = len(str(last))
     for rank, path in zip(range(start, last + 1), paths.iterate(index, node, start)):
         text = encoding.path_text(tower, path)
-        out.write(f"{rank:>{width}}  {text}\n")
+        out.write(wrap_words(f"{rank:>{width}}  {text}", indent=" " * (width + 2)))
         if args.draw:
             for line in encoding.draw(tower, encoding.encode(tower, path)):
                 if line != text:
