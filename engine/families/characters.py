@@ -135,7 +135,9 @@ FAMILY = Family(
     summary="a group and module V from a character table (a file, or a built-in S_N, C_N, D_N table)",
     keys={
         "file": "PATH of a character-table file (TOML; README: Character table files)",
-        "group": "a built-in table instead of a file: symmetric(N), cyclic(N) or dihedral(N) (order 2N)",
+        "group": "a built-in table instead of a file: symmetric(N) (irreducibles named by partitions, "
+        "(N) trivial), cyclic(N) (x0 trivial, ..., x{N-1}: g ↦ ζ^j) or dihedral(N) (D_N of order 2N: 1 "
+        "trivial, e the sign on reflections, for even N also f and fe, and the 2-dimensional r1, r2, ...)",
         "module": "V as a sum of irreducibles by name, e.g. r1 or x1+x4 or 2*(3,1)+(4)",
         "halves": "yes (default) or no: with a subgroup in the file, show or hide the half levels",
     },

@@ -30,6 +30,8 @@ def build_parser() -> argparse.ArgumentParser:
         prog="towerscope",
         description="Exact Bratteli diagrams of tensor-power towers. With no command: open the "
         "explorer on the demo session.",
+        epilog="The CLI contract: what --json prints (fields, exact integers), the spec, level and label "
+        "syntax and the exit statuses (2 for bad input) stay fixed for scripts; README, 'For scripts'.",
     )
     sub = parser.add_subparsers(dest="command", metavar="COMMAND", parser_class=_Parser)
     for module in COMMAND_MODULES:

@@ -49,7 +49,7 @@ def run_mckay(args: argparse.Namespace) -> int:
                 writer.writerow([label] + row)
     else:
         for step in steps:
-            _print_matrix(step, f"{tower.spec}: step {step['step']} ({step['from']} → {step['to']}, constant {step['constant']})")
+            _print_matrix(step, f"{tower.spec}: step {step['step']} ({step['from']} → {step['to']}, Σ_j M_ij·dim_j = {step['constant']}·dim_i)")
     return 0
 
 
@@ -95,5 +95,5 @@ def run_check(args: argparse.Namespace) -> int:
             s = report["subgroup"]
             say(f"subgroup {s['group']}, order {s['order']}, index {s['index']}: half levels")
     for step in report["steps"]:
-        _print_matrix(step, f"step {step['step']} ({step['from']} → {step['to']}, constant {step['constant']})")
+        _print_matrix(step, f"step {step['step']} ({step['from']} → {step['to']}, Σ_j M_ij·dim_j = {step['constant']}·dim_i)")
     return 0
