@@ -28,7 +28,7 @@ import random
 from dataclasses import dataclass, field
 from typing import Callable
 
-from engine.algebras.action import ENTRY_LIMIT, acts_as_zero, flat_entries, space_dimension
+from engine.algebras.action import acts_as_zero, flat_entries, space_dimension
 from engine.algebras.bases import count, iter_basis, unrank
 from engine.algebras.diagrams import Blocks
 from engine.algebras.linalg import PRIMES, crt, primitive, rational
@@ -53,9 +53,33 @@ def stack_entries(level: AlgebraLevel) -> int:
     return count(level) * n ** r
 
 
-def feasible(level: AlgebraLevel) -> bool:
-    """Whether the stack fits the limits (else the rank is Σm², ``"bratteli"``)."""
-    return stack_entries(level) <= ENTRY_LIMIT
+#: the most nonzero entries of the stacked action matrices (about 10 s of Python work)
+STACK_ENTRY_LIMIT = 1_500_000
+#: the most field operations (rows × columns × rank of the reduced system) a rank may take
+#: (about 10 s with python-flint on one core)
+OPERATION_LIMIT = 6 * 10 ** 9
+
+
+def elimination_cost(level: AlgebraLevel, upper: int) -> int:
+    """An estimate of the field operations of the rank: the reduced system has at most
+    upper + 16 rows, and as many columns as diagrams up to 2·(upper + 16), else upper + 16
+    (see ``image_rank``)."""
+    rows = upper + 16
+    cols = count(level) if count(level) <= 2 * rows else rows
+    return rows * cols * min(rows, cols)
+
+
+def infeasible(level: AlgebraLevel, upper: int) -> str:
+    """Why the rank cannot be computed in reasonable time and memory ("" when it can)."""
+    entries = stack_entries(level)
+    if entries > STACK_ENTRY_LIMIT:
+        return (f"the stacked action matrices would hold about {entries:,} entries (the limit is "
+                f"{STACK_ENTRY_LIMIT:,})")
+    cost = elimination_cost(level, upper)
+    if cost > OPERATION_LIMIT:
+        return (f"the elimination would take about {cost:.1e} operations modulo p (the limit is "
+                f"{OPERATION_LIMIT:.0e})")
+    return ""
 
 
 @dataclass
@@ -143,9 +167,9 @@ class RankReport:
 def image_rank(level: AlgebraLevel, upper: int, progress: Progress | None = None, cancel=None,
                keep: bool = False) -> RankReport:
     """The dimension of the image of the level's algebra in End(V^{⊗k}); ``upper`` is Σm²."""
-    if not feasible(level):
-        return RankReport(upper, "bratteli", upper, note=f"the stacked action matrices would hold about "
-                          f"{stack_entries(level):,} entries")
+    why = infeasible(level, upper)
+    if why:
+        return RankReport(upper, "bratteli", upper, note=why)
     stack = build_stack(level, progress, cancel)
     d = stack.diagrams
     slack = upper + 16
