@@ -63,11 +63,23 @@ def require(tower: "Tower", kind: type[C], who: str = "") -> C:
 # ----- size guard ------------------------------------------------------------------------------
 @dataclass(frozen=True)
 class SizeGuard(Capability):
-    """Upper estimates that let the diagram refuse a build before starting it.
+    """Estimates that let the diagram refuse a build before starting it (within a factor 10 of
+    the real counts, held by ``tests/engine/test_estimates.py``):
 
-    ``edges(upto)`` estimates the edges walked to build levels 0..upto (None: small)."""
+    - ``edges(upto)``: the edges walked to build levels 0..upto (None: small);
+    - ``nodes(upto)``: the nodes on levels 0..upto together (what the built levels keep);
+      None: bounded by the edges;
+    - ``digits(index)``: decimal digits of the largest multiplicity at a level; None: those of
+      the tensor dimension (every multiplicity is at most it, since Σ m·dim = dim V^{⊗k});
+    - ``extra(upto)``: other per-level work, in additions of 9-digit limbs (e.g. the Bell
+      triangle behind the partition algebras' dimensions); None: nothing worth counting.
+
+    ``engine.diagram.Diagram.cost`` turns them into seconds and bytes."""
 
     edges: Callable[[int], int | None]
+    nodes: Callable[[int], int] | None = None
+    digits: Callable[[int], int] | None = None
+    extra: Callable[[int], int] | None = None
     title = "a size guard"
 
 

@@ -18,6 +18,7 @@ from dataclasses import dataclass
 from typing import Callable, Hashable, Iterator, Protocol
 
 from engine.capabilities import AlgebraLevel, ClosedForm, DiagramAlgebra, LevelJump, SizeGuard
+from engine.costs import Cost, digits_of, estimate
 from engine.errors import Cancelled, TooLarge
 from engine.path_counts import PathCounts
 from engine.tower import Edge, Node, Tower
@@ -115,20 +116,46 @@ class Diagram:
         """Index of the deepest level built so far."""
         return len(self._counts.levels) - 1
 
-    def check_size(self, index: int) -> None:
-        """Raise TooLarge when building up to ``index`` is estimated to exceed the edge limit."""
+    def cost(self, upto: int, start: int = 0, printed: bool = False, kept: bool = True) -> Cost:
+        """The estimated cost of building levels start..upto (``engine.costs``): edges, nodes and
+        digits from the family's size guard, the digits of the tensor dimension where it gives none."""
+        guard = self._guard
+        edges = nodes = 0
+        if guard is not None:
+            edges = guard.edges(upto) or 0
+            if start > 0:
+                edges = max(0, edges - (guard.edges(start - 1) or 0))
+            nodes = guard.nodes(upto) if guard.nodes is not None else edges
+        if guard is not None and guard.digits is not None:
+            digits = guard.digits(upto)
+        else:
+            digits = digits_of(max(1, self.tower.tensor_dimension(upto)))
+        extra = guard.extra(upto) if guard is not None and guard.extra is not None else 0
+        return estimate(edges, nodes, digits, extra, printed, kept, upto - start + 1)
+
+    def check_size(self, index: int, printed: bool = False) -> None:
+        """Raise TooLarge when building up to ``index`` is estimated to exceed the edge limit, or
+        to take more than about a minute or 2 GB (``printed``: the levels will be printed too)."""
         if index <= self.built:
             return
-        estimate = None if self._guard is None else self._guard.edges(index)
-        if estimate is not None and estimate > self.edge_limit:
-            from engine.levels import format_level
+        self._refuse(self.cost(index, printed=printed), f"building {self.tower.spec} to level", index)
 
-            raise TooLarge(
-                f"building {self.tower.spec} to level {format_level(self.tower.level_of(index))} "
-                f"would walk about {estimate:.2e} edges, over the limit of {self.edge_limit:.0e}; "
-                "ask for a lower level, or for single nodes (answered by a closed form or a jump where "
-                "the family has one)"
-            )
+    def check_stream(self, start: int, upto: int, printed: bool = True) -> None:
+        """``check_size`` for levels start..upto swept one after the other and not kept."""
+        self._refuse(self.cost(upto, start, printed, kept=False), f"sweeping {self.tower.spec} to level", upto)
+
+    def _refuse(self, cost: Cost, what: str, index: int) -> None:
+        if cost.edges <= self.edge_limit and not cost.too_large():
+            return
+        from engine.levels import format_level
+
+        limit = f"over the limit of {self.edge_limit:.0e} edges" if cost.edges > self.edge_limit else \
+            "over the limits of about a minute and 2 GB"
+        raise TooLarge(
+            f"{what} {format_level(self.tower.level_of(index))} would walk {cost.text()}, {limit}; "
+            "ask for a lower level, or for single nodes (answered by a closed form or a jump where "
+            "the family has one)"
+        )
 
     def check_digits(self, index: int) -> None:
         """Raise TooLarge when the tower's closed form (or jump) at ``index`` would work with numbers
@@ -242,6 +269,7 @@ class Diagram:
                 yield index, self.level(index)
             return
         self.check_digits(upto)
+        self.check_stream(start, upto, printed=False)
         level = self.level_at(start)
         yield start, level
         children = self.tower.children

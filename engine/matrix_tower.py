@@ -142,9 +142,36 @@ class MatrixTower(Tower):
             value *= c
         return value
 
+    #: levels whose node sets are walked exactly by the estimate (then the last ones repeat)
+    _WALKED = 64
+
+    def _estimates(self, upto: int) -> tuple[int, int]:
+        """(edges, nodes) over levels 0..upto: the node sets with a path walked for the first
+        levels (no multiplicities), then the largest of the last levels walked, repeated."""
+        period = len(self.pattern)
+        current = {self._root}
+        edges = nodes = 0
+        recent: list[tuple[int, int]] = []
+        walked = min(upto, self._WALKED)
+        for index in range(walked + 1):
+            step = self._edges[index % period]
+            out = sum(len(step[node]) for node in current)
+            nodes += len(current)
+            edges += out if index < upto else 0
+            recent = (recent + [(out, len(current))])[-2 * period:]
+            if index < walked:
+                current = {child for node in current for child, _ in step[node]}
+        rest = upto - walked
+        if rest > 0:
+            edges += rest * max(e for e, _ in recent)
+            nodes += rest * max(n for _, n in recent)
+        return edges, nodes
+
     def estimate_edges(self, upto: int) -> int:
-        per_step = max(sum(len(v) for v in edges.values()) for edges in self._edges)
-        return per_step * (upto + 1)
+        return self._estimates(upto)[0]
+
+    def estimate_nodes(self, upto: int) -> int:
+        return self._estimates(upto)[1]
 
     #: path encodings (a walk on the graph: the sequence of node names)
     encodings: tuple[str, ...] = ("walk",)
@@ -155,7 +182,7 @@ class MatrixTower(Tower):
         from engine.jumps import jump_digits, jump_level
 
         return [
-            SizeGuard(self.estimate_edges),
+            SizeGuard(self.estimate_edges, self.estimate_nodes),
             steps,
             LevelJump(lambda index: jump_level(steps, index), lambda index: jump_digits(steps, index)),
             Encodings(self.encodings),

@@ -68,6 +68,33 @@ class CountTable:
         return self._table[j]
 
 
+def orthogonal_counts(n: int, limit: int, cap: int = ESTIMATE_CAP) -> list[int] | None:
+    """[partitions λ of j with λ'_1 + λ'_2 ≤ n, for j = 0..limit] (the labels of O(n)-modules),
+    or None when the table would cost too much to make.
+
+    With s = λ'_2 rows of length ≥ 2 and r = λ'_1 rows, removing the first column leaves a
+    partition with exactly s parts, of j − r: so the count is [j ≤ n] + Σ_{s ≥ 1} Σ_{r=s}^{n−s}
+    P_{≤s}(j − r − s), P_{≤s}(m) the partitions of m into at most s parts (Andrews, *The Theory
+    of Partitions*, ch. 1), a difference of prefix sums for each s."""
+    top = min(n // 2, limit // 2)
+    if top * (limit + 1) > 3_000_000:
+        return None
+    out = [1 if j <= n else 0 for j in range(limit + 1)]
+    ways = [1] + [0] * limit  # P_{≤s}(m), built up part size by part size (conjugation)
+    for s in range(1, top + 1):
+        for total in range(s, limit + 1):
+            value = ways[total] + ways[total - s]
+            ways[total] = value if value < cap else cap
+        prefix = [0] * (limit + 2)  # prefix[m + 1] = Σ_{m' ≤ m} P_{≤s}(m')
+        for m in range(limit + 1):
+            prefix[m + 1] = min(prefix[m] + ways[m], cap)
+        for j in range(2 * s, limit + 1):
+            high, low = j - 2 * s, j - n - 1
+            value = prefix[high + 1] - (prefix[low + 1] if low >= 0 else 0)
+            out[j] = min(out[j] + value, cap)
+    return out
+
+
 def vector_dimension(family: str, params: dict[str, str], minimum: int = 1) -> int:
     """The spec key ``n`` (dim V), between ``minimum`` and MAX_N; a SpecError otherwise."""
     n = int_param(family, params, "n", minimum=minimum)
@@ -146,7 +173,7 @@ class OneBoxTower(Tower):
     encodings: tuple[str, ...] = ("updown", "labels")
 
     def capabilities(self) -> list[Capability]:
-        found: list[Capability] = [SizeGuard(self.estimate_edges), Encodings(self.encodings)]
+        found: list[Capability] = [SizeGuard(self.estimate_edges, self.estimate_nodes), Encodings(self.encodings)]
         if type(self).algebra_level is not OneBoxTower.algebra_level:
             found.append(DiagramAlgebra(self.algebra_level, self.first_unfaithful()))
         return found
@@ -166,19 +193,25 @@ class OneBoxTower(Tower):
         return self.algebra_level(index).name
 
     # ----- size -----------------------------------------------------------------------------
-    def estimate_edges(self, upto: int) -> int:
-        """Σ over levels of (nodes on the level) × (a bound on the steps out of one node).
+    def size_counts(self, upto: int) -> "CountTable | list[int]":
+        """The admissible partitions of each size j ≤ upto (an upper count): by default those with
+        at most ``rows`` rows, which is exact for GL_N and Sp(2M)."""
+        return CountTable(upto, self.rows)
 
-        Nodes on level k: the partitions of k (GL), or of j ≤ k with j ≡ k (mod 2) (O, Sp), with
-        at most ``rows`` rows; past level 20000 the last level's bound (levels grow) times the
-        number of levels, with the compositions bound C(k+rows−1, rows−1) for the count."""
+    def _estimates(self, upto: int) -> tuple[int, int]:
+        """(edges, nodes) over levels 0..upto: Σ over levels of (nodes on the level) × (a bound on
+        the steps out of one node: at most rows+1 addable and rows removable corners, and at most
+        √(2k)+2 of either).  Nodes on level k: the admissible partitions of k (GL), or of j ≤ k
+        with j ≡ k (mod 2) (O, Sp); past level 20000 the last level's bound times the number of
+        levels, with the compositions bound C(k+rows−1, rows−1) for the count."""
         factor = 2 if self.removes else 1
         if upto > _SUMMED_LEVELS:
             count = min(comb(upto + self.rows - 1, self.rows - 1), ESTIMATE_CAP)
             nodes = count * (upto // 2 + 1 if self.removes else 1)
-            return min((upto + 1) * nodes * factor * corner_bound(upto), ESTIMATE_CAP)
-        counts = CountTable(upto, self.rows)
-        total = 0
+            degree = factor * min(self.rows + 1, corner_bound(upto))
+            return min((upto + 1) * nodes * degree, ESTIMATE_CAP), min((upto + 1) * nodes, ESTIMATE_CAP)
+        counts = self.size_counts(upto)
+        total = all_nodes = 0
         level_nodes = [0, 0]  # running Σ_{j ≤ k, j ≡ k} counts[j], by parity
         for k in range(upto + 1):
             if self.removes:
@@ -186,10 +219,18 @@ class OneBoxTower(Tower):
                 nodes = level_nodes[k % 2]
             else:
                 nodes = counts[k]
-            total += nodes * factor * corner_bound(k)
+            all_nodes += nodes
+            if k < upto:  # the edges out of the top level are not walked
+                total += nodes * factor * min(self.rows + 1, corner_bound(k))
             if total >= ESTIMATE_CAP:
-                return ESTIMATE_CAP
-        return total
+                return ESTIMATE_CAP, min(all_nodes, ESTIMATE_CAP)
+        return total, all_nodes
+
+    def estimate_edges(self, upto: int) -> int:
+        return self._estimates(upto)[0]
+
+    def estimate_nodes(self, upto: int) -> int:
+        return self._estimates(upto)[1]
 
     # ----- labels ---------------------------------------------------------------------------
     def format(self, node: Partition) -> str:

@@ -153,7 +153,7 @@ class AlternatingTower(Tower):
 
     def capabilities(self) -> list[Capability]:
         found: list[Capability] = [
-            SizeGuard(self.estimate_edges),
+            SizeGuard(self.estimate_edges, self.symmetric.estimate_nodes),
             ClosedForm(self.multiplicity, self.reachable, self.estimate_digits),
             LevelJump(self.deep_level, self.estimate_digits),
             Encodings(("labels",)),

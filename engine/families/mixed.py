@@ -95,7 +95,7 @@ class MixedTower(Tower):
         return self.n**index
 
     def capabilities(self) -> list[Capability]:
-        return [SizeGuard(self.estimate_edges), Encodings(("pairs",)),
+        return [SizeGuard(self.estimate_edges, self.estimate_nodes), Encodings(("pairs",)),
                 DiagramAlgebra(self.algebra_level, self.first_unfaithful())]
 
     def first_unfaithful(self) -> int | None:
@@ -116,23 +116,32 @@ class MixedTower(Tower):
     def algebra_name(self, index: int) -> str:
         return self.algebra_level(index).name
 
-    def estimate_edges(self, upto: int) -> int:
-        """Σ over levels of Σ_t p_N(r−t)·p_N(s−t) nodes (p_N: partitions with at most N rows)
-        times a bound on the boxes one can add or remove; past level 2000 each level's sum is
-        bounded by (min(r,s)+1)·p_N(r)·p_N(s) (p_N grows), which costs one step."""
+    def _estimates(self, upto: int) -> tuple[int, int]:
+        """(edges, nodes) over levels 0..upto: Σ over levels of Σ_t p_N(r−t)·p_N(s−t) nodes
+        (p_N: partitions with at most N rows) times a bound on the boxes one can add or remove
+        (at most N+1 corners, and √(2k)+2); past level 2000 each level's sum is bounded by
+        (min(r,s)+1)·p_N(r)·p_N(s) (p_N grows), which costs one step."""
         upto = min(upto, self.max_index)
         counts = CountTable(upto, self.n)
-        total = 0
+        total = all_nodes = 0
         for index in range(upto + 1):
             r, s = self.counts(index)
             if index <= 2000:
                 nodes = sum(counts[r - t] * counts[s - t] for t in range(min(r, s) + 1))
             else:
                 nodes = (min(r, s) + 1) * counts[r] * counts[s]
-            total += nodes * 2 * corner_bound(index)
+            all_nodes += nodes
+            if index < upto:  # the edges out of the top level are not walked
+                total += nodes * 2 * min(self.n + 1, corner_bound(index))
             if total >= ESTIMATE_CAP:
-                return ESTIMATE_CAP
-        return total
+                return ESTIMATE_CAP, min(all_nodes, ESTIMATE_CAP)
+        return total, all_nodes
+
+    def estimate_edges(self, upto: int) -> int:
+        return self._estimates(upto)[0]
+
+    def estimate_nodes(self, upto: int) -> int:
+        return self._estimates(upto)[1]
 
     # ----- labels ---------------------------------------------------------------------------
     def format(self, node: PartitionPair) -> str:

@@ -19,7 +19,7 @@ from fractions import Fraction
 from engine.capabilities import AlgebraLevel, DiagramAlgebra, Encodings, SizeGuard
 from engine.classical_dimensions import orthogonal_dimension
 from engine.combinatorics import double_factorial_odd
-from engine.partition_tower import OneBoxTower, vector_dimension
+from engine.partition_tower import CountTable, OneBoxTower, orthogonal_counts, vector_dimension
 from engine.partitions import Partition
 from engine.specs import Family
 class OrthogonalTower(OneBoxTower):
@@ -40,6 +40,12 @@ class OrthogonalTower(OneBoxTower):
 
     def admissible_text(self) -> str:
         return f"λ'_1 + λ'_2 ≤ {self.n} (first two columns)"
+
+    def size_counts(self, upto: int) -> "CountTable | list[int]":
+        """Exactly the admissible partitions of each size (``orthogonal_counts``), where the table
+        is cheap; else those with at most N rows."""
+        exact = orthogonal_counts(self.n, upto)
+        return super().size_counts(upto) if exact is None else exact
 
     def level_kind(self, index: int) -> str:
         return f"O({self.n})"

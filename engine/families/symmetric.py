@@ -141,7 +141,7 @@ class SymmetricTower(Tower):
 
     def capabilities(self) -> list[Capability]:
         found: list[Capability] = [
-            SizeGuard(self.estimate_edges),
+            SizeGuard(self.estimate_edges, self.estimate_nodes, extra=self.estimate_extra),
             ClosedForm(self.multiplicity, self.reachable, self.estimate_digits, self.formula, self.closed_form),
             LevelJump(self.deep_level, self.estimate_digits),
             DiagramAlgebra(self.algebra_level, self.first_unfaithful()),
@@ -187,18 +187,41 @@ class SymmetricTower(Tower):
         k = self._k(index)
         return sum(partition_count(j, max_part=top - j) for j in range(min(k, top) + 1) if top - j >= 0)
 
+    def _level_sizes(self, upto: int) -> tuple[int, int]:
+        """(Σ nodes × corners, Σ nodes) over levels 0..upto; past the stable range (index 2N+2,
+        where the levels stop growing) the last two levels repeat.  A node (N−j, ν) of level k
+        has j ≤ k and at most min(√(2N), √(2j)+1)+2 corners (a partition with c corners has at
+        least c(c+1)/2 boxes); without half levels a step restricts and induces (corners², and
+        at most p(N) distinct children)."""
+        def corners(index: int) -> int:
+            c = min(isqrt(2 * self.n) + 2, isqrt(2 * min(self._k(index), self.n)) + 3)
+            return c if self.halves else min(c * c, partition_count(self.n))
+
+        stable_from = 2 * self.n + 2 if self.halves else self.n + 1
+        edges = nodes = 0
+        for index in range(min(upto, stable_from) + 1):
+            size = self.level_size(index)
+            nodes += size
+            if index < upto:  # the edges out of the top level are not walked
+                edges += size * corners(index)
+        if upto > stable_from:
+            size = max(self.level_size(stable_from), self.level_size(stable_from - 1))
+            nodes += (upto - stable_from) * size
+            edges += (upto - stable_from) * size * corners(stable_from)
+        return edges, nodes
+
     def estimate_edges(self, upto: int) -> int:
         """Nodes per level times a bound on corners (a partition of N has at most √(2N)+1)."""
-        corners = isqrt(2 * self.n) + 2
-        if not self.halves:
-            corners = corners * corners
-        total = 0
-        stable_from = 2 * self.n + 2 if self.halves else self.n + 1
-        for index in range(min(upto, stable_from) + 1):
-            total += self.level_size(index) * corners
-        if upto > stable_from:
-            total += (upto - stable_from) * max(self.level_size(stable_from), self.level_size(stable_from - 1)) * corners
-        return total
+        return self._level_sizes(upto)[0]
+
+    def estimate_nodes(self, upto: int) -> int:
+        return self._level_sizes(upto)[1]
+
+    def estimate_extra(self, upto: int) -> int:
+        """The Bell triangle up to row 2k+1 behind the dimensions of P_k(N) and P_{k+1/2}(N):
+        about M²/2 additions of numbers of at most M·log10(M) digits (B(M) ≤ M^M), M = 2k+1."""
+        rows = 2 * self._k(upto) + 2
+        return rows * rows // 2 * (int(rows * log10(rows)) // 9 + 1)
 
     # ----- labels ---------------------------------------------------------------------------
     def format(self, node: Partition) -> str:

@@ -1,0 +1,76 @@
+"""What building (and printing) levels will cost, estimated before starting.
+
+The model (constants measured once by ``bench/bench_estimates.py`` on the development machine,
+rounded up):
+
+    seconds = E·(t_edge + t_limb·d/9) + X·t_limb + [printed] n·t_text·d²
+    bytes   = n·(b_node + b_digit·d)            (the levels kept; one level when streamed)
+
+E: edges walked (``SizeGuard.edges``), n: nodes on the levels (``SizeGuard.nodes``), d: the
+average decimal digits of the multiplicities (half those of the top level: they grow about
+linearly with the level), X: other per-level work (``SizeGuard.extra``, e.g. the Bell triangle),
+9 decimal digits ≈ one 30-bit limb of a CPython int, and CPython turns an int of d digits into
+text in time ∝ d².
+"""
+
+from __future__ import annotations
+
+from dataclasses import dataclass
+from math import log10
+
+#: seconds per edge walked with machine-size multiplicities (learning the edge included)
+T_EDGE = 4e-7
+#: seconds per 30-bit limb added (big multiplicities)
+T_LIMB = 6e-9
+#: seconds per (decimal digit)² to turn one int into text
+T_TEXT = 8e-11
+#: bytes per node kept on a level (list slot, int object, its share of the node store)
+B_NODE = 120
+#: bytes per decimal digit of a kept int (log2(10)/8, rounded up)
+B_DIGIT = 0.42
+
+#: refuse work estimated past these
+TIME_LIMIT = 60.0
+MEMORY_LIMIT = 2 * 10**9
+
+
+@dataclass(frozen=True)
+class Cost:
+    edges: int
+    nodes: int
+    digits: int
+    seconds: float
+    bytes: float
+
+    def too_large(self) -> bool:
+        return self.seconds > TIME_LIMIT or self.bytes > MEMORY_LIMIT
+
+    def text(self) -> str:
+        """One line: '… edges, multiplicities of about … digits: about … s and … GB'."""
+        return (f"{self.edges:.2e} edges, {self.nodes:.2e} nodes, multiplicities of up to {self.digits:,} digits: "
+                f"about {_seconds(self.seconds)} and {self.bytes / 1e9:.2g} GB")
+
+
+def _seconds(value: float) -> str:
+    if value < 120:
+        return f"{value:.2g} s"
+    if value < 7200:
+        return f"{value / 60:.2g} min"
+    return f"{value / 3600:.2g} h" if value < 1e6 else f"{value:.1e} s"
+
+
+def digits_of(value: int) -> int:
+    """Decimal digits of a positive int, from its bit length (no conversion to text)."""
+    return max(1, int(value.bit_length() * log10(2)) + 1)
+
+
+def estimate(edges: int, nodes: int, digits: int, extra: int = 0, printed: bool = False,
+             kept: bool = True, levels: int = 1) -> Cost:
+    """The cost of walking ``edges`` edges over ``nodes`` nodes whose largest multiplicity at the
+    top has ``digits`` digits (``levels``: how many levels, for the memory of a streamed walk)."""
+    average = max(1.0, digits / 2)
+    seconds = edges * (T_EDGE + T_LIMB * average / 9) + extra * T_LIMB
+    if printed:
+        seconds += nodes * T_TEXT * average * average
+    held = nodes if kept else nodes / max(levels, 1) * 2
+    return Cost(edges, nodes, digits, seconds, held * (B_NODE + B_DIGIT * average))
