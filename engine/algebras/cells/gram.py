@@ -134,15 +134,16 @@ class GramMatrix:
             return [1]
         from engine.algebras.cells import symmetry
 
-        if self.module is not None and symmetry.reflection_applies(self.module):
-            plus, minus, pairs = symmetry.split(self.module, self)
+        if self.module is not None and symmetry.applies(self.module):
             import flint
 
-            product = flint.fmpz_poly(plus.determinant(cancel)) * flint.fmpz_poly(minus.determinant(cancel))
-            quotient, remainder = divmod(product, flint.fmpz_poly([4**pairs]))
-            assert remainder == 0, "the reflection split must divide exactly"
-            out = [int(c) for c in quotient.coeffs()] or [0]
-            return out
+            blocks, change_squared = symmetry.split(self.module, self)
+            product = flint.fmpz_poly([1])
+            for block in blocks:
+                product *= flint.fmpz_poly(block.determinant(cancel))
+            quotient, remainder = divmod(product, flint.fmpz_poly([change_squared]))
+            assert remainder == 0, "the symmetry split must divide exactly"
+            return [int(c) for c in quotient.coeffs()] or [0]
         degree = self.degree_bound
         bound = 4 * self.coefficient_bound_squared()  # (2H)²
         modulus = 1

@@ -1,19 +1,25 @@
-"""Splitting a Gram matrix by the left–right reflection, to make its determinant cheaper.
+"""Splitting a Gram matrix by a symmetry of the half diagrams, to make its determinant cheaper.
 
-The reflection w0 of the vertices (i ↦ r+1−i) acts on a cell module whose Specht module is
-one-dimensional as a signed permutation A of the half diagrams (h ↦ ε·w0(h), ε = ±1 the Specht
-character of the induced permutation).  The pairing of half diagrams only sees how their blocks
-meet, so ⟨A a, A b⟩ = ⟨a, b⟩: for the permutation diagram w0 of the algebra this is the form's
-invariance, and for Temperley–Lieb (where w0 is not a diagram of the algebra) the reflection of a
-planar picture is planar and keeps every loop.  As A is an involution, its ±1 eigenspaces are
-orthogonal for the form, so in the basis e_h ± ε·e_{w0 h} (e_h for half diagrams fixed by A)
+A vertex permutation w that maps the level's half diagrams to half diagrams acts on a cell module
+whose Specht module is one-dimensional as a signed permutation R of the basis (h ↦ ε·w(h), ε = ±1
+the Specht character of the induced permutation of propagating blocks).  The pairing of two half
+diagrams only sees how their blocks meet, so R keeps the form: ⟨R a, R b⟩ = ⟨a, b⟩ (for a
+permutation diagram w of the algebra this is the invariance of the form).  With R^m = 1, the space
+is the direct sum of V_d = ker Φ_d(R), d | m (Φ_d the cyclotomic polynomials: x^m − 1 = ∏ Φ_d has
+no repeated factor), and the V_d are orthogonal for the form, since Φ_d is self-reciprocal and
+Φ_d(R) is invertible on V_e for e ≠ d (common practice; e.g. Serre, *Linear Representations of
+Finite Groups*, 1977, §12 for the rational decomposition).  In the basis C of the V_d's
 
-    det G = det G₊ · det G₋ / 4^(pairs),
+    det G = ∏_d det G_d / det(C)²,
 
-and two determinants of half the size and half the degree replace one (about 16 times less work
-by evaluation and interpolation).  Used where it applies: one-dimensional Specht modules, and the
-reflection must keep the algebra (not at half levels of the partition tower; walled Brauer only
-for a word that reads the same backwards).
+and several determinants of smaller size and degree replace one (the work of evaluation and
+interpolation falls with the fifth power of the size).  Which symmetry:
+
+- the rotation i ↦ i+1 (mod r) where it keeps the half diagrams: Temperley–Lieb with no through
+  line (non-crossing perfect matchings of points on a circle), and any vertex permutation for the
+  partition and Brauer algebras (not at half levels);
+- otherwise the reflection i ↦ r+1−i (Temperley–Lieb with through lines; walled Brauer for a word
+  that reads the same backwards).
 """
 
 from __future__ import annotations
@@ -27,55 +33,114 @@ if TYPE_CHECKING:
     from engine.algebras.cells.gram import GramMatrix
 
 
-def reflection_applies(module: CellModule) -> bool:
+def _vertex_map(module: CellModule) -> tuple[int, ...] | None:
+    """The vertex permutation to split by (image of each vertex 0..r−1), or None."""
     level = module.level
+    r = module.r
     if module.specht_size != 1 or level.half or len(module.halves) < 4:
-        return False
-    return level.kind != "walled-brauer" or level.word == level.word[::-1]
+        return None
+    rotation = tuple((i + 1) % r for i in range(r))
+    reflection = tuple(r - 1 - i for i in range(r))
+    if level.kind in ("partition", "brauer"):
+        return rotation
+    if level.kind == "temperley-lieb":
+        return rotation if sum(module.label.counts) == 0 else reflection
+    if level.kind == "walled-brauer" and level.word == level.word[::-1]:
+        return reflection
+    return None
 
 
-def split(module: CellModule, gram: "GramMatrix") -> tuple["GramMatrix", "GramMatrix", int]:
-    """(G₊, G₋, number of swapped pairs) for a module where ``reflection_applies``."""
+def applies(module: CellModule) -> bool:
+    return _vertex_map(module) is not None
+
+
+def _signed_images(module: CellModule, w: tuple[int, ...]) -> list[tuple[int, int]]:
+    r = module.r
+    diagram = tuple(sorted((w[i], r + i) for i in range(r)))
+    out = []
+    for h in module.halves:
+        blocks, marks = h
+        if sum(module.label.counts) == 0:
+            moved = sorted((tuple(sorted(w[v] for v in block)), mark) for block, mark in zip(blocks, marks))
+            image = (tuple(b for b, _ in moved), tuple(m for _, m in moved))
+            out.append((module.half_index[image], 1))
+            continue
+        found = module.glue(diagram, h)
+        assert found is not None
+        image, _, perms = found
+        out.append((module.half_index[image], int(module.specht_matrix(perms)[0][0])))
+    return out
+
+
+def _cycles(images: list[tuple[int, int]]) -> list[tuple[list[int], list[int], int]]:
+    """The cycles of a signed permutation: (positions i_k, signs σ_k with R^k e_{i_0} = σ_k e_{i_k},
+    the sign s with R^L e_{i_0} = s e_{i_0})."""
+    seen = [False] * len(images)
+    out = []
+    for start in range(len(images)):
+        if seen[start]:
+            continue
+        positions, signs = [start], [1]
+        seen[start] = True
+        j, sign = images[start]
+        while j != start:
+            seen[j] = True
+            positions.append(j)
+            signs.append(sign)
+            j, step = images[j]
+            sign *= step
+        out.append((positions, signs, sign))
+    return out
+
+
+def split(module: CellModule, gram: "GramMatrix") -> tuple[list["GramMatrix"], int]:
+    """(the blocks G_d, det(C)²) for a module where ``applies``.
+
+    On a cycle e, Re, ..., R^(L−1)e of R with R^L e = s·e the cycle's span is Q[x]/(x^L − s), and
+    ker Φ_d(R) there has the basis x^j·(x^L − s)/Φ_d(x), j < φ(d), for the Φ_d dividing x^L − s."""
+    import flint
+
     from engine.algebras.cells.gram import GramMatrix
 
-    r = module.r
-    w0 = tuple(sorted((i, r + r - 1 - i) for i in range(r)))
-    image: list[tuple[int, int]] = []
-    for h in module.halves:
-        found = module.glue(w0, h)
-        assert found is not None
-        half, _, perms = found
-        sign = int(module.specht_matrix(perms)[0][0])
-        image.append((module.half_index[half], sign))
-    plus: list[list[tuple[int, int]]] = []   # each vector as [(half index, coefficient)]
-    minus: list[list[tuple[int, int]]] = []
-    pairs = 0
-    for i, (j, sign) in enumerate(image):
-        if j == i:
-            (plus if sign == 1 else minus).append([(i, 1)])
-        elif i < j:
-            pairs += 1
-            plus.append([(i, 1), (j, sign)])
-            minus.append([(i, 1), (j, -sign)])
-    dense_rows = [{} for _ in range(gram.size)]
+    w = _vertex_map(module)
+    assert w is not None
+    vectors: dict[int, list[list[tuple[int, int]]]] = {}
+    change_squared = 1
+    for positions, signs, s in _cycles(_signed_images(module, w)):
+        length = len(positions)
+        target = flint.fmpz_poly([-s] + [0] * (length - 1) + [1])
+        columns = []
+        for d in range(1, 2 * length + 1):
+            if (2 * length) % d or (s == 1) != (length % d == 0):
+                continue
+            phi = flint.fmpz_poly.cyclotomic(d)
+            quotient = target // phi
+            for j in range(phi.degree()):
+                coefficients = [int(c) for c in (quotient * flint.fmpz_poly([0] * j + [1])).coeffs()]
+                vector = [(positions[k], c * signs[k]) for k, c in enumerate(coefficients) if c]
+                vectors.setdefault(d, []).append(vector)
+                columns.append(coefficients + [0] * (length - len(coefficients)))
+        assert len(columns) == length
+        change_squared *= int(flint.fmpz_mat(columns).det()) ** 2
+    dense: list[dict[int, list[tuple[int, int]]]] = [{} for _ in range(gram.size)]
     for i, row in enumerate(gram.rows):
         for j, c, q in row:
-            dense_rows[i][j] = (c, q)
-
-    def restricted(vectors: list[list[tuple[int, int]]]) -> GramMatrix:
-        rows = []
-        for a in vectors:
-            row = []
-            for b_index, b in enumerate(vectors):
-                terms: dict[int, Fraction] = {}
+            assert q.denominator == 1
+            dense[i].setdefault(j, []).append((c, int(q)))
+    out = []
+    for d in sorted(vectors):
+        basis = vectors[d]
+        rows_d: list[list[tuple[int, int, Fraction]]] = []
+        for a in basis:
+            row: list[tuple[int, int, Fraction]] = []
+            for b_index, b in enumerate(basis):
+                terms: dict[int, int] = {}
                 for i, ca in a:
+                    entries = dense[i]
                     for j, cb in b:
-                        entry = dense_rows[i].get(j)
-                        if entry is not None:
-                            c, q = entry
-                            terms[c] = terms.get(c, Fraction(0)) + ca * cb * q
-                row.extend((b_index, c, q) for c, q in terms.items() if q)
-            rows.append(row)
-        return GramMatrix(len(vectors), rows, [Fraction(1)] * len(vectors))
-
-    return restricted(plus), restricted(minus), pairs
+                        for c, q in entries.get(j, ()):
+                            terms[c] = terms.get(c, 0) + ca * cb * q
+                row.extend((b_index, c, Fraction(q)) for c, q in terms.items() if q)
+            rows_d.append(row)
+        out.append(GramMatrix(len(basis), rows_d, [Fraction(1)] * len(basis)))
+    return out, change_squared

@@ -139,3 +139,18 @@ def test_symmetric_group_determinant_is_a_constant_and_rank_is_full():
         answer = cell_answer(level, label)
         assert answer.determinant == [1]
         assert answer.rank == answer.dimension
+
+
+@pytest.mark.parametrize("kind,r,label", [("brauer", 6, "()"), ("brauer", 5, "(1)"), ("partition", 4, "()"),
+                                          ("partition", 3, "(1)"), ("temperley-lieb", 8, "()"),
+                                          ("temperley-lieb", 7, "(1)")])
+def test_symmetry_split_gives_the_same_determinant(kind, r, label):
+    # the split by rotation or reflection (engine/algebras/cells/symmetry.py) against the plain route
+    from engine.algebras.cells import symmetry
+
+    level = level_of(kind, r)
+    module = CellModule(level, read_cell_label(level, label))
+    gram = GramMatrix.of(module)
+    assert symmetry.applies(module)
+    plain = GramMatrix(gram.size, gram.rows, gram.gamma, None)
+    assert gram.determinant() == plain.determinant()
