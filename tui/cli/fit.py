@@ -258,5 +258,25 @@ def wrap_words(line: str, width: int | None = None, indent: str = "  ") -> str:
     return "\n".join(lines) + "\n"
 
 
-def write(text: str, stream: TextIO | None = None) -> None:
-    (stream or sys.stdout).write(text)
+class FittedOutput:
+    """A stand-in for ``sys.stdout`` whose complete lines are fitted by ``wrap_words`` (broken only at
+    spaces, continuations indented): for commands that write prose and lists line by line."""
+
+    def __init__(self, indent: str = "    ", stream: TextIO | None = None) -> None:
+        self.indent = indent
+        self.stream = stream or sys.stdout
+        self.width = output_width()
+        self._pending = ""
+
+    def write(self, text: str) -> int:
+        self._pending += text
+        while "\n" in self._pending:
+            line, self._pending = self._pending.split("\n", 1)
+            self.stream.write(wrap_words(line, self.width, self.indent))
+        return len(text)
+
+    def flush(self) -> None:
+        if self._pending:
+            self.stream.write(wrap_words(self._pending, self.width, self.indent))
+            self._pending = ""
+        self.stream.flush()

@@ -36,10 +36,9 @@ def run(args: argparse.Namespace) -> int:
         print_json(document)
         return 0
     values = document["values"]
-    from tui.cli.fit import wrap_words
+    from tui.cli.fit import FittedOutput
 
-    class out:  # every line fitted to the width, broken only at spaces (never inside a number)
-        write = staticmethod(lambda text: sys.stdout.write(wrap_words(text, indent="    ")))
+    out = FittedOutput()  # lines fitted to the width, broken only at spaces (never inside a number)
 
     out.write(f"{form.name()} on {tower.spec}, for every k ≥ 0 (S = Stirling numbers of the second kind):\n")
     out.write(f"  = {form.stirling_text()}\n")

@@ -4,6 +4,7 @@ as a polynomial in the parameter x, and its rank at the spec's parameter (CLI co
 from __future__ import annotations
 
 import argparse
+import sys
 
 from tui.cli.support import level_index, open_diagram, print_json
 
@@ -70,5 +71,7 @@ def run(args: argparse.Namespace) -> int:
         lines.append("Gram matrix (rows and columns: half diagrams, then tableaux, in basis order):")
         for row in gram_matrix_rows(answer):
             lines.append("  " + "  ".join(f"[{polynomial_text(entry)}]" for entry in row))
-    print("\n".join(lines))
+    from tui.cli.fit import wrap_words
+
+    sys.stdout.write("".join(wrap_words(line) for line in lines))  # broken only at spaces
     return 0

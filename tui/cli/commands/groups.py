@@ -54,16 +54,15 @@ def run_mckay(args: argparse.Namespace) -> int:
 
 
 def _print_matrix(step: dict[str, Any], title: str) -> None:
-    from tui.cli.support import console
-    from rich.table import Table
+    from tui.cli.fit import Column, Table, wrap_words
 
-    table = Table(title=title, title_justify="left")
-    table.add_column("node (dim)")
-    for label, d in zip(step["columns"], step["column_dimensions"]):
-        table.add_column(f"{label} ({d})", justify="right")
+    # fitted to the width: a wide matrix is split into column blocks that repeat the row names
+    columns = [Column("node (dim)", key=True)]
+    columns += [Column(f"{label} ({d})", "right") for label, d in zip(step["columns"], step["column_dimensions"])]
+    table = Table(columns)
     for label, d, row in zip(step["rows"], step["row_dimensions"], step["matrix"]):
-        table.add_row(f"{label} ({d})", *[str(m) if m else "·" for m in row])
-    console().print(table)
+        table.add_row(f"{label} ({d})", *[m if m else "·" for m in row])
+    sys.stdout.write(wrap_words(title) + table.render())
 
 
 # ----- check ------------------------------------------------------------------------------------
@@ -74,12 +73,10 @@ def run_check(args: argparse.Namespace) -> int:
     if args.json:
         print(json.dumps(report))
         return 0
-    from tui.cli.support import console as make_console
-
-    out = make_console()
+    from tui.cli.fit import wrap_words
 
     def say(text: str) -> None:
-        out.print(text, markup=False)
+        sys.stdout.write(wrap_words(text))  # broken only at spaces
 
     if report["kind"] == "tensor graph":
         say(f"{report['file']}: a valid tensor graph, {report['title']!r}; root {report['root']!r}; "

@@ -53,7 +53,9 @@ def run_kernel(args: argparse.Namespace) -> int:
         element = {parse_diagram(t["diagram"], level.vertices): t["coefficient"] for t in element_json["terms"]}
         return format_element(element, level)
 
-    out = sys.stdout
+    from tui.cli.fit import FittedOutput
+
+    out = FittedOutput()  # lines fitted to the width, broken only at spaces (never inside a number)
     shown = document["elements"]
     out.write(f"kernel of {document['algebra']} on the tensor space ({tower.spec}, level {document['level']}): "
               f"dimension {document['dimension']}")

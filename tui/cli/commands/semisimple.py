@@ -4,6 +4,7 @@ at x = N every cell module's Gram rank beside the multiplicity of the tower's no
 from __future__ import annotations
 
 import argparse
+import sys
 
 from tui.cli.support import DelayedProgress, level_index, open_diagram, print_json
 
@@ -71,5 +72,7 @@ def run(args: argparse.Namespace) -> int:
         lines.append(f"cells with a simple module that V^⊗k does not see (no node here): {', '.join(killed)}")
     lines.append("the ranks agree with the tower's multiplicities on every node" if report.agree
                  else "the ranks DISAGREE with the tower somewhere (see the rows marked no)")
-    print("\n".join(lines))
+    from tui.cli.fit import wrap_words
+
+    sys.stdout.write("".join(wrap_words(line) for line in lines))  # broken only at spaces
     return 0
