@@ -22,6 +22,13 @@ def export_path(text: str) -> Path:
 
 def check_export_path(text: str) -> tuple[str | None, str]:
     """For the export prompt: (error or None, what will be written where)."""
+    try:
+        return _check_export_path(text)
+    except (OSError, ValueError) as exc:  # a name too long, a NUL byte
+        return f"not a usable file name ({exc.strerror if isinstance(exc, OSError) and exc.strerror else str(exc)[:80]})", ""
+
+
+def _check_export_path(text: str) -> tuple[str | None, str]:
     if not text.strip():
         return "type a file name, e.g. figure.tikz", ""
     path = export_path(text)
@@ -59,12 +66,16 @@ def ask_export(app: ExplorerApp) -> None:
     def done(text: str | None) -> None:
         if text is None:
             return
-        path = export_path(text)
+        try:
+            path = export_path(text)
+        except (OSError, ValueError) as exc:
+            app.notify(f"not a usable file name: {str(exc)[:80]}", title="not exported", severity="error", markup=False)
+            return
 
         def work() -> None:
             try:
                 written = write_text_atomic(path, render(diagram, upto, format_for_path(str(path))))
-            except UserError as exc:
+            except (UserError, OSError, ValueError) as exc:
                 app.notify(str(exc), title="not exported", severity="error", markup=False)
                 return
             app.notify(f"exported levels 0..{level} to {written}", markup=False)
