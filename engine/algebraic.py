@@ -40,7 +40,7 @@ _MAX_POWER = 10_000
 #: bits of the largest coefficient of any intermediate value (about 6,000 digits)
 MAX_COEFFICIENT_BITS = 20_000
 #: term products (weighted by coefficient size) an entry may spend while it is evaluated
-MAX_WORK = 3_000_000
+MAX_WORK = 500_000
 
 Tree = tuple[Any, ...]
 
@@ -235,7 +235,7 @@ class _Evaluator:
             raise self.fail(
                 f"a coefficient would have about {bits:,} bits, more than the {MAX_COEFFICIENT_BITS:,} accepted"
             )
-        self.work += terms * (1 + bits // 256)
+        self.work += terms * (1 + bits // 64)
         if self.work > MAX_WORK:
             raise self.fail(f"it takes more than {MAX_WORK:,} steps to evaluate (the limit for a table entry)")
 
