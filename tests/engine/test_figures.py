@@ -205,3 +205,17 @@ def test_tikz_compiles_and_fits_12cm(tmp_path):
         box = re.search(rb"/MediaBox\s*\[\s*([-\d.]+)\s+([-\d.]+)\s+([-\d.]+)\s+([-\d.]+)", pdf)
         width_cm = (float(box.group(3)) - float(box.group(1))) * 2.54 / 72  # PDF units: 1/72 in
         assert width_cm <= 12.3  # standalone adds no border by default
+
+
+def test_crossings_between_agrees_with_counting_every_pair():
+    import random
+
+    rng = random.Random(7)
+    for _ in range(50):
+        top, bottom = list(range(rng.randint(1, 8))), [f"b{j}" for j in range(rng.randint(1, 8))]
+        edges = list({(rng.choice(top), rng.choice(bottom), 1) for _ in range(rng.randint(0, 20))})
+        # the definition, pair by pair (common practice): ends in opposite orders on both rows
+        where = {b: j for j, b in enumerate(bottom)}
+        brute = sum(1 for i, (a1, b1, _) in enumerate(edges) for a2, b2, _ in edges[i + 1:]
+                    if (a1 - a2) * (where[b1] - where[b2]) < 0)
+        assert crossings_between(top, bottom, edges) == brute
