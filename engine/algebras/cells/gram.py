@@ -16,7 +16,9 @@ are at most H = ∏_rows ‖row‖₂ (Hadamard's inequality on |x| = 1, then Ca
 row's entries are the sums of the absolute values of their coefficients.  For each prime p of a
 set whose product exceeds 2H, det G′(a) mod p at a = 0..D (python-flint ``nmod_mat``), then
 Newton's forward-difference interpolation mod p; the coefficients follow by the Chinese remainder
-theorem (balanced residues).  Exact by construction: no floats, no probabilistic step.
+theorem (balanced residues).  Exact by construction: no floats, no probabilistic step.  Where a
+symmetry of the half diagrams applies (``symmetry``: rotation or reflection, one-dimensional Specht
+modules) the matrix is first split into orthogonal blocks and their determinants multiplied.
 """
 
 from __future__ import annotations
