@@ -97,18 +97,16 @@ def resolve_target(path: str | os.PathLike[str]) -> Path:
 
 
 def _resolve(given: Path) -> Path:
+    try:
+        mode: int | None = os.stat(given).st_mode  # through symlinks: /dev/stdout may be a pipe
+    except FileNotFoundError:
+        mode = None
+    if mode is not None and not stat.S_ISREG(mode):
+        raise UserError(f"cannot write {str(given)!r}: it is {_kind(mode)}; write to a regular file")
     target = Path(os.path.realpath(given)) if given.is_symlink() else given
     folder = target.parent if str(target.parent) else Path(".")
     if not folder.is_dir():
         raise UserError(f"cannot write {str(given)!r}: folder {str(folder)!r} does not exist")
-    try:
-        mode = os.stat(target).st_mode
-    except FileNotFoundError:
-        return target
-    except OSError as exc:
-        raise _cannot_write(given, exc) from None
-    if not stat.S_ISREG(mode):
-        raise UserError(f"cannot write {str(given)!r}: it is {_kind(mode)}; write to a regular file")
     return target
 
 
