@@ -12,13 +12,27 @@ import math
 EXACT_DIGITS_SHOWN = 3000
 
 
+#: beyond this many bits, powers of ten and divisions go through python-flint (GMP): Python's
+#: own are quadratic, and a level reached by a jump has numbers of hundreds of thousands of digits
+_FLINT_BITS = 20_000
+
+
+def _big(n: int):  # noqa: ANN202 - an int or a flint fmpz
+    if n.bit_length() > _FLINT_BITS:
+        import flint
+
+        return flint.fmpz(n)
+    return n
+
+
 def digit_count(n: int) -> int:
     """Number of decimal digits of |n| (1 for 0), without converting huge ints to text."""
     n = abs(n)
     if n < 10**18:
         return len(str(n))
     guess = int(n.bit_length() * math.log10(2))  # floor(log10 n) or one above it
-    return guess if n < 10**guess else guess + 1
+    big = _big(n)
+    return guess if big < big.__class__(10) ** guess else guess + 1
 
 
 def short_int(n: int, width: int = 8) -> str:
@@ -31,7 +45,8 @@ def short_int(n: int, width: int = 8) -> str:
     exponent = digits - 1
     tail = f"e{exponent}"
     mantissa_digits = max(1, width - len(tail) - 1)  # digits of the mantissa, one before the point
-    head = n // 10 ** (digits - mantissa_digits)
+    big = _big(n)
+    head = big // big.__class__(10) ** (digits - mantissa_digits)
     text = str(head)
     if len(text) > 1:
         text = text[0] + "." + text[1:]
@@ -42,10 +57,16 @@ def exact_int(n: int) -> str:
     """All digits of ``n`` with thin grouping by threes; very long numbers show head … tail."""
     digits = digit_count(n)
     if digits > EXACT_DIGITS_SHOWN:
-        head = n // 10 ** (digits - 60)
-        tail = n % 10**60
+        big = _big(n)
+        head = big // big.__class__(10) ** (digits - 60)
+        tail = int(big % 10**60)
         return f"{head}…{tail:060d} ({digits:,} digits)"
     return f"{n:,}".replace(",", " ") if digits <= 30 else str(n)
+
+
+def full_digits(n: int) -> str:
+    """Every digit of ``n`` (python-flint for huge numbers: Python's int-to-text is quadratic)."""
+    return str(_big(n))
 
 
 def wrap_text(text: str, width: int) -> list[str]:

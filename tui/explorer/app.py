@@ -25,7 +25,15 @@ from engine.tower import Node
 from tui.explorer.actions import ALL, GLOBAL, Act, bindings, key_text
 from tui.explorer.building import Building
 from tui.explorer.dialogs import Dialogs
-from tui.explorer.messages import BuildFailed, BuildProgress, FaithfulFound, LevelsReady, PathShown, SideReady
+from tui.explorer.messages import (
+    BuildFailed,
+    BuildProgress,
+    FaithfulFound,
+    LevelsReady,
+    PathShown,
+    SideReady,
+    SumsReady,
+)
 from tui.explorer.screens.main import MainScreen
 from tui.explorer.session_files import read_settings, write_settings
 from tui.explorer.state import ExplorerState
@@ -124,12 +132,20 @@ class ExplorerApp(Building, Dialogs, App[None]):
         gc.freeze()
         self._start_faithful_search()
 
+    @on(SumsReady)
+    def _sums_ready(self, message: SumsReady) -> None:
+        if message.request == self._request and message.index == self.state.index and self._drawable():
+            self.sums = message.sums
+            self.main.redraw_sums()
+
     @on(SideReady)
     def _side_ready(self, message: SideReady) -> None:
         data = message.data
         if self._drawable() and data.index in self.main.wanted_levels():
             self.shown[data.index] = data
             self.main.redraw_panes()
+            if abs(data.index - self.state.index) == 1:
+                self.main.redraw_details()  # the parents or children of a jumped level are known now
 
     @on(BuildFailed)
     def _build_failed(self, message: BuildFailed) -> None:
@@ -265,9 +281,11 @@ class ExplorerApp(Building, Dialogs, App[None]):
         node = self.state.node
         if data is None or node is None:
             return
+        from tui.numbers import digit_count, full_digits
+
         value = data.multiplicity.get(node, 0)
-        self.copy_to_clipboard(str(value))
-        digits = len(str(value))
+        self.copy_to_clipboard(full_digits(value))
+        digits = digit_count(value)
         self.notify(f"copied the multiplicity of {self.state.tower.format(node)} ({digits:,} digits)", markup=False)
 
     # ----- help and the command palette -------------------------------------------------------------------

@@ -21,7 +21,7 @@ from engine.diagram import Diagram
 from engine.errors import Cancelled, UserError
 from engine.tower import Node
 from tui.explorer import view_model as vm
-from tui.explorer.messages import BuildFailed, BuildProgress, LevelsReady, SideReady
+from tui.explorer.messages import BuildFailed, BuildProgress, LevelsReady, SideReady, SumsReady
 
 if TYPE_CHECKING:
     from tui.explorer.view_model import LevelData
@@ -62,7 +62,6 @@ class Building:
                 if not vm.by_jump(diagram, index):
                     diagram.ensure(index, lambda done, total: post(BuildProgress(request, done, total, index)), cancel)
                 data = vm.level_data(diagram, index)
-            sums = vm.level_sums(diagram, data)
             level = data.multiplicity
             if node is None and toward is not None:
                 there, came_from = toward
@@ -70,9 +69,13 @@ class Building:
                 node = next((n for n, _ in near if n in level), None)
             if node is None or node not in level:
                 node = data.nodes[0] if data.nodes else None
-            if index > 0 and node is not None:
+            if index > 0 and node is not None and not data.jumped:
                 diagram.parents(index, node)  # warms the reverse edges for families without parents()
-            post(LevelsReady(request, index, node, data, sums))
+            if data.jumped:  # show the level now; its sums (of numbers of any size) follow
+                post(LevelsReady(request, index, node, data, None))
+                post(SumsReady(request, index, vm.level_sums(diagram, data)))
+            else:
+                post(LevelsReady(request, index, node, data, vm.level_sums(diagram, data)))
         except Cancelled:
             post(BuildFailed(request, "stopped", cancelled=True))
         except UserError as exc:

@@ -200,14 +200,14 @@ class Dialogs:
 
         def write(text: str) -> str | None:
             """Save; the message of a failure (the dialog then stays open with it)."""
-            path = resolve(text)
             try:
+                path = resolve(text)
                 path.parent.mkdir(parents=True, exist_ok=True)
                 from engine.files.session import save_session
 
                 written = save_session(path, state.to_session())
-            except (UserError, OSError) as exc:
-                return f"not saved: {exc}"
+            except (UserError, OSError, ValueError) as exc:
+                return f"not saved: {exc.strerror if isinstance(exc, OSError) and exc.strerror else exc}"
             state.path, self.demo = written, False  # type: ignore[attr-defined]
             self.saved()
             self.notify(f"saved {written}", markup=False)  # type: ignore[attr-defined]
@@ -232,6 +232,9 @@ class Dialogs:
             return
         try:
             state = read_session(resolve(str(text)))
+        except (OSError, ValueError) as exc:
+            self.notify(f"cannot open that path: {exc}"[:300], title="not opened", severity="error", markup=False)  # type: ignore[attr-defined]
+            return
         except UserError as exc:
             self.notify(str(exc), title="not opened", severity="error", markup=False)  # type: ignore[attr-defined]
             return

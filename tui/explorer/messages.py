@@ -41,6 +41,15 @@ class LevelsReady(Message):
 
 
 @dataclass
+class SumsReady(Message):
+    """The sums of a level shown before them (a level reached by a jump)."""
+
+    request: int
+    index: int
+    sums: Any
+
+
+@dataclass
 class SideReady(Message):
     """A level that a side pane shows is ready (built in the background after the asked one)."""
 

@@ -130,7 +130,7 @@ def complete_path(text: str) -> str:
         base = Path.cwd() / folder
     try:
         names = sorted(p.name + ("/" if p.is_dir() else "") for p in base.iterdir() if p.name.startswith(start))
-    except OSError:
+    except (OSError, ValueError):
         return text
     names = [n for n in names if not n.startswith(".") or start.startswith(".")]
     if not names:

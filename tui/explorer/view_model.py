@@ -86,7 +86,7 @@ def level_data(diagram: Diagram, index: int) -> LevelData:
         level, nodes = diagram.level(index), diagram.nodes(index)
     fmt = tower.format
     label_width = max((cell_len(fmt(v)) for v in nodes), default=1)
-    m_width = len(short_int(max(level.values(), default=0), 8))
+    m_width = len(short_int(max(level.values(), default=0), 11 if len(nodes) <= EXACT_COLUMNS_UP_TO else 8))
     if len(nodes) <= EXACT_COLUMNS_UP_TO:
         d_width = max((len(short_int(tower.dimension(index, v), 7)) for v in nodes), default=1)
     else:
@@ -176,31 +176,48 @@ def level_rows(diagram: Diagram, data: LevelData | None) -> LevelRows | None:
     )
 
 
-def links(state: ExplorerState, index: int) -> dict[Node, int]:
+def parents_shown(state: ExplorerState, shown: dict[int, LevelData]) -> list[tuple[Node, int]] | None:
+    """The selection's parents with edge counts; None while a level reached by a jump waits for
+    the level before it (asking the diagram would jump there on the UI thread)."""
+    diagram, index, node = state.diagram, state.index, state.node
+    if node is None or index == 0:
+        return []
+    if index - 1 <= diagram.built:
+        return diagram.parents(index, node)
+    before = shown.get(index - 1)
+    candidates = diagram.tower.parents(index, node)
+    if before is None or candidates is None:
+        return None
+    return [(p, e) for p, e in candidates if p in before.position]
+
+
+def links(state: ExplorerState, index: int, shown: dict[int, LevelData] | None = None) -> dict[Node, int]:
     """Edge counts joining the selection to the nodes of level ``index`` (a neighbouring level)."""
     diagram = state.diagram
     if state.node is None:
         return {}
     if index == state.index - 1:
-        return dict(diagram.parents(state.index, state.node))
+        return dict(parents_shown(state, shown or {}) or [])
     if index == state.index + 1:
         return dict(diagram.children(state.index, state.node))
     return {}
 
 
-def pane_marks(state: ExplorerState, index: int, cursor: int | None) -> PaneMarks:
+def pane_marks(state: ExplorerState, index: int, cursor: int | None,
+               shown: dict[int, LevelData] | None = None) -> PaneMarks:
     """Marks for the pane of level ``index`` given the selection at ``state.index``."""
     path = state.highlighted[index] if 0 <= index < len(state.highlighted) else None
     return PaneMarks(
         cursor=cursor if index == state.index else None,
-        links=links(state, index),
+        links=links(state, index, shown),
         path_node=path,
         bookmarked=frozenset(n for i, n in state.bookmarks if i == index),
         noted=frozenset(n for i, n in state.notes if i == index),
     )
 
 
-def node_details(state: ExplorerState, data: LevelData | None) -> NodeDetails | None:
+def node_details(state: ExplorerState, data: LevelData | None,
+                 shown: dict[int, LevelData] | None = None) -> NodeDetails | None:
     diagram, index, node = state.diagram, state.index, state.node
     if node is None or data is None:
         return None
@@ -214,7 +231,7 @@ def node_details(state: ExplorerState, data: LevelData | None) -> NodeDetails | 
         kind=tower.level_kind(index),
         dimension=tower.dimension(index, node),
         multiplicity=data.multiplicity.get(node, 0),
-        parents=[(fmt(p), e) for p, e in diagram.parents(index, node)],
+        parents=[(fmt(p), e) for p, e in (parents_shown(state, shown or {}) or [])],
         children=[(fmt(c), e) for c, e in diagram.children(index, node)] if has_next else [],
         parent_level=level_text(diagram, index - 1) if index > 0 else None,
         child_level=level_text(diagram, index + 1) if has_next else None,

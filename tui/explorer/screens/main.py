@@ -122,12 +122,12 @@ class MainScreen(Screen[None]):
                 continue
             is_current = index == state.index
             pane.set_class(is_current, "-current")
-            pane.styles.width = lay.current_width if is_current else "1fr"
+            pane.styles.width = lay.current_width if is_current and lay.count > 1 else "1fr"
             data = app.shown.get(index)
             if data is None:
                 pane.show_waiting(vm.level_text(diagram, index), "  building…")
                 continue
-            marks = vm.pane_marks(state, index, cursor)
+            marks = vm.pane_marks(state, index, cursor, app.shown)
             pane.show(vm.level_rows(diagram, data), marks)
             if is_current and cursor is not None:
                 pane.scroll_to_center_if_needed(cursor)
@@ -145,7 +145,7 @@ class MainScreen(Screen[None]):
             if index == state.index and moved_only and cursor is not None:
                 pane.move_cursor(cursor)
                 continue
-            marks = vm.pane_marks(state, index, cursor)
+            marks = vm.pane_marks(state, index, cursor, self.explorer.shown)
             if moved_only and index != state.index and not marks.links and not pane.marks.links:
                 continue
             pane.show(pane.rows, marks)
@@ -159,7 +159,7 @@ class MainScreen(Screen[None]):
         if state.view.details:
             details = self.query_one("#details", DetailsPane)
             details.unfold = getattr(app, "unfold", False)
-            details.show(vm.node_details(state, app.shown.get(state.index)))
+            details.show(vm.node_details(state, app.shown.get(state.index), app.shown))
 
     def redraw_sums(self) -> None:
         app = self.explorer

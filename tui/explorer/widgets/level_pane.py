@@ -107,8 +107,21 @@ class LevelPane(ScrollView, can_focus=False):
         self.virtual_size = Size(0, 0 if rows is None else len(rows) + 1)
         if not same_level:
             self.scroll_to(y=0, animate=False, immediate=True)
-        self.border_title = "" if rows is None else f"{rows.title} · {len(rows):,}"
+        self.border_title = "" if rows is None else self._title(rows)
         self.refresh()
+
+    def _title(self, rows: LevelRows) -> str:
+        """``level kind · count``, the kind left out (then the count) when the pane is too narrow."""
+        room = (self.size.width or 80) - 3
+        for title in (f"{rows.title} · {len(rows):,}", f"{rows.title.split(' ')[0]} · {len(rows):,}",
+                      rows.title.split(" ")[0]):
+            if cell_len(title) <= room:
+                return title
+        return rows.title.split(" ")[0]
+
+    def on_resize(self) -> None:
+        if self.rows is not None:
+            self.border_title = self._title(self.rows)
 
     def show_waiting(self, title: str, text: str) -> None:
         """No rows yet: the level is being built (or cannot be)."""
