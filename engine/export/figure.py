@@ -11,7 +11,7 @@ for proportional fonts); a figure asked to fit a width shrinks its spacing, then
 from __future__ import annotations
 
 import re
-from dataclasses import dataclass, field
+from dataclasses import dataclass
 from typing import Hashable
 
 from engine.diagram import Diagram
@@ -75,7 +75,6 @@ class Figure:
     left: float = 0.0
     right: float = 0.0
     bottom: float = 0.0
-    extra: dict = field(default_factory=dict)
 
     @property
     def width(self) -> float:
@@ -190,10 +189,9 @@ def build_figure(diagram: Diagram, upto: int, options: FigureOptions) -> Figure:
     left = -(widest - 1) / 2 * x_step - half - LEVEL_COLUMN
     right = (widest - 1) / 2 * x_step + half
     levels = [(i * y_step, level_parts(tower.level_of(i))) for i in range(upto + 1)]
-    figure = Figure(tower.spec, list(nodes.values()), edges, levels, size, layout,
-                    _legend(diagram, options, bool(lit_nodes)), bool(lit_nodes), left, right,
-                    upto * y_step + max(n.height for n in nodes.values()))
-    return figure
+    return Figure(tower.spec, list(nodes.values()), edges, levels, size, layout,
+                  _legend(diagram, options, bool(lit_nodes)), bool(lit_nodes), left, right,
+                  upto * y_step + max(n.height for n in nodes.values()))
 
 
 def _highlight_target(diagram: Diagram, upto: int, text: str) -> tuple[int, Hashable]:
