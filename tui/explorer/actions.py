@@ -50,6 +50,8 @@ MAIN: tuple[Act, ...] = (
     Act("more_panes(-1)", ("minus",), "fewer panes", "show fewer, wider level panes (kept in the session)", VIEW),
     Act("show_diagram", ("v",), "diagram", "draw the Bratteli diagram around this level, the selection's paths highlighted", VIEW, footer=True),
     Act("plot_sums", ("m",), "plot", "plot Σm and Σm² against the algebra's dimension by level (log scale)", VIEW),
+    Act("show_growth", ("w",), "growth", "finite towers: the selected node's growth against its asymptotic line, "
+        "the random walk's distance by step, the McKay graph of the step", VIEW),
     Act("show_algebra", ("a",), "algebra", "the level's diagram algebra: its diagrams drawn, products, the rank "
         "of its action, the kernel and its generator, cell modules and Gram determinants", VIEW),
     Act("pick_tower", ("t",), "tower", "open another tower: pick the family, fill in its keys", FILES, footer=True),

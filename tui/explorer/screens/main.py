@@ -233,6 +233,11 @@ class MainScreen(Screen[None]):
 
         self.app.push_screen(SumsPlotScreen(self.explorer.state))
 
+    def action_show_growth(self) -> None:
+        from tui.explorer.screens.growth import GrowthScreen
+
+        self.app.push_screen(GrowthScreen(self.explorer.state))
+
     def action_show_algebra(self) -> None:
         from engine.errors import UserError
         from tui.explorer.screens.algebra import AlgebraView

@@ -1,0 +1,158 @@
+"""The finite-tower view (key w): for the selected node, log10 m(k) against k with the asymptotic
+line log10(p·d/|G|) + k·log10(dim V); the random walk's total-variation distance against k (exact
+rationals from the engine, their logarithms plotted); and the McKay graph of the repeating step,
+every node with its dimension and its neighbours with edge counts.  Keys 1, 2, 3 switch between
+them; Esc or w closes.  The screen holds no mathematics: it asks ``engine.export.finite_documents``."""
+
+from __future__ import annotations
+
+import math
+from fractions import Fraction
+from typing import TYPE_CHECKING
+
+from rich.text import Text
+from textual.app import ComposeResult
+from textual.binding import Binding
+from textual.containers import VerticalScroll
+from textual.screen import Screen
+from textual.widgets import Footer, Static
+from textual_plotext import PlotextPlot
+
+from engine.errors import UserError
+
+if TYPE_CHECKING:
+    from tui.explorer.state import ExplorerState
+
+#: levels plotted and walk steps taken
+LEVELS = 60
+
+
+def log10(x: int | Fraction) -> float:
+    """log10 of a positive int or Fraction of any size (plotting only)."""
+    x = Fraction(x)
+    if x <= 0:
+        return float("nan")
+
+    def big(n: int) -> float:
+        shift = max(n.bit_length() - 1000, 0)
+        return math.log10(n >> shift) + shift * math.log10(2)
+
+    return big(x.numerator) - big(x.denominator)
+
+
+class GrowthScreen(Screen[None]):
+    DEFAULT_CSS = """
+    GrowthScreen #growth-title { height: auto; }
+    GrowthScreen #growth-plot { height: 1fr; }
+    GrowthScreen #growth-graph { height: 1fr; }
+    """
+
+    BINDINGS = [
+        Binding("escape", "close", "back", key_display="Esc"),
+        Binding("w", "close", "back", show=False),
+        Binding("1", "show('growth')", "growth"),
+        Binding("2", "show('walk')", "walk"),
+        Binding("3", "show('graph')", "McKay graph"),
+    ]
+
+    def __init__(self, state: "ExplorerState", **kwargs: object) -> None:
+        super().__init__(**kwargs)  # type: ignore[arg-type]
+        self.state = state
+        self.mode = "growth"
+        self.growth: dict | None = None
+        self.walk: dict | None = None
+        self.problem: str | None = None
+
+    def compose(self) -> ComposeResult:
+        yield Static(Text("reading the tower…"), id="growth-title")
+        yield PlotextPlot(id="growth-plot")
+        with VerticalScroll(id="growth-graph"):
+            yield Static("", id="growth-graph-text")
+        yield Footer(compact=True, show_command_palette=False)
+
+    def on_mount(self) -> None:
+        from engine.export.finite_documents import growth_document, walk_document
+
+        tower = self.state.tower
+        label = tower.format(self.state.node) if self.state.node is not None else None
+        try:
+            self.walk = walk_document(tower, LEVELS)
+            self.growth = growth_document(tower, label or self.walk["nodes"][0], LEVELS)
+        except UserError as exc:
+            self.problem = str(exc)
+        self.action_show(self.mode)
+
+    def action_show(self, mode: str) -> None:
+        self.mode = mode
+        plot = self.query_one("#growth-plot", PlotextPlot)
+        graph = self.query_one("#growth-graph", VerticalScroll)
+        title = self.query_one("#growth-title", Static)
+        if self.problem is not None:
+            title.update(Text(self.problem))
+            plot.display = graph.display = False
+            return
+        plot.display = mode != "graph"
+        graph.display = mode == "graph"
+        if mode == "growth":
+            self._draw_growth(plot, title)
+        elif mode == "walk":
+            self._draw_walk(plot, title)
+        else:
+            self._draw_graph(title)
+
+    def _draw_growth(self, plot: PlotextPlot, title: Static) -> None:
+        g = self.growth
+        assert g is not None
+        points = [(k, log10(m)) for k, m in enumerate(g["values"]) if m]
+        coefficient = Fraction(g["leading"]["coefficient"])
+        line = [(k, log10(coefficient) + k * math.log10(g["base"])) for k, _ in points]
+        plt = plot.plt
+        plt.clear_data()
+        plt.clear_figure()
+        if points:
+            plt.plot([p[0] for p in points], [p[1] for p in points], label=f"log10 m({g['levels']})", marker="dot")
+            plt.plot([p[0] for p in line], [p[1] for p in line], label="asymptotic line", marker="braille")
+        plt.xlabel("k")
+        plt.title(f"{g['label']}: {g['text']}")
+        last = g["ratios"][-1]["approximately"] if g["ratios"] else "—"
+        title.update(Text(f"1 growth  2 walk  3 McKay graph │ {g['label']}: m/leading term at k = "
+                          f"{g['ratios'][-1]['k'] if g['ratios'] else '—'} ≈ {last}"))
+        plot.refresh()
+
+    def _draw_walk(self, plot: PlotextPlot, title: Static) -> None:
+        w = self.walk
+        assert w is not None
+        points = [(k, log10(Fraction(d))) for k, d in enumerate(w["distance"]) if Fraction(d) > 0]
+        plt = plot.plt
+        plt.clear_data()
+        plt.clear_figure()
+        if points:
+            plt.plot([p[0] for p in points], [p[1] for p in points], label="log10 total variation", marker="dot")
+        plt.xlabel("steps k")
+        plt.title("the walk from the trivial module: distance to the stationary law")
+        word = (f"periodic (period {w['period']}): the distance does not tend to 0" if w["period"] > 1
+                else f"mixing time to {w['epsilon']}: {w['mixing_time']}")
+        law = "Plancherel d²/|G|" if w["plancherel"] else "stationary law on the nodes reached"
+        title.update(Text(f"1 growth  2 walk  3 McKay graph │ {law}; {word}"))
+        plot.refresh()
+
+    def _draw_graph(self, title: Static) -> None:
+        from engine.series.finite import finite_view
+
+        view = finite_view(self.state.tower, "the McKay graph")
+        width = max(len(label) for label in view.labels)
+        lines = Text()
+        for i, label in enumerate(view.labels):
+            edges = []
+            for j, m in enumerate(view.matrix[i]):
+                if m:
+                    edges.append(f"{view.labels[j]}" + (f"×{m}" if m > 1 else "") + (" (loop)" if i == j else ""))
+            mark = "◆" if i == view.root else "●"
+            lines.append(f"{mark} {label:<{width}} d={view.dimensions[i]:<4}", style="bold" if i == view.root else "")
+            lines.append(" ── " + ", ".join(edges) + "\n")
+        self.query_one("#growth-graph-text", Static).update(lines)
+        title.update(Text(f"1 growth  2 walk  3 McKay graph │ the step of {view.spec}: {view.size} nodes, "
+                          f"Σ_j M_ij d_j = {view.constant}·d_i, ◆ the root"))
+
+    def action_close(self) -> None:
+        self.dismiss(None)
