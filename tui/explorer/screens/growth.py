@@ -1,5 +1,5 @@
 """The finite-tower view (key w): for the selected node, log10 m(k) against k with the asymptotic
-line log10(p·d/|G|) + k·log10(dim V); the random walk's total-variation distance against k (exact
+line log10(p·d/|G|) + k·log10(dim V); the random walk's total-variation distance against k (and the lazy walk's) (exact
 rationals from the engine, their logarithms plotted); and the McKay graph of the repeating step,
 every node with its dimension and its neighbours with edge counts.  Keys 1, 2, 3 switch between
 them; Esc or w closes.  The screen holds no mathematics: it asks ``engine.export.finite_documents``."""
@@ -61,6 +61,7 @@ class GrowthScreen(Screen[None]):
         self.mode = "growth"
         self.growth: dict | None = None
         self.walk: dict | None = None
+        self.lazy: dict | None = None
         self.problem: str | None = None
 
     def compose(self) -> ComposeResult:
@@ -77,6 +78,7 @@ class GrowthScreen(Screen[None]):
         label = tower.format(self.state.node) if self.state.node is not None else None
         try:
             self.walk = walk_document(tower, LEVELS)
+            self.lazy = walk_document(tower, LEVELS, lazy=True)
             self.growth = growth_document(tower, label or self.walk["nodes"][0], LEVELS)
         except UserError as exc:
             self.problem = str(exc)
@@ -128,10 +130,14 @@ class GrowthScreen(Screen[None]):
         plt.clear_figure()
         if points:
             plt.plot([p[0] for p in points], [p[1] for p in points], label="log10 total variation", marker="dot")
+        if self.lazy is not None:
+            lazy = [(k, log10(Fraction(d))) for k, d in enumerate(self.lazy["distance"]) if Fraction(d) > 0]
+            plt.plot([p[0] for p in lazy], [p[1] for p in lazy], label="lazy walk ½(I + P)", marker="braille")
         plt.xlabel("steps k")
         plt.title("the walk from the trivial module: distance to the stationary law")
-        word = (f"periodic (period {w['period']}): the distance does not tend to 0" if w["period"] > 1
-                else f"mixing time to {w['epsilon']}: {w['mixing_time']}")
+        lazy = self.lazy["mixing_time"] if self.lazy is not None else None
+        word = (f"periodic (period {w['period']}): the distance does not tend to 0; lazy mixing time "
+                f"to {w['epsilon']}: {lazy}" if w["period"] > 1 else f"mixing time to {w['epsilon']}: {w['mixing_time']}")
         law = "Plancherel d²/|G|" if w["plancherel"] else "stationary law on the nodes reached"
         title.update(Text(f"1 growth  2 walk  3 McKay graph │ {law}; {word}"))
         plot.refresh()
