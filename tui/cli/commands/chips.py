@@ -37,8 +37,8 @@ def run(args: argparse.Namespace) -> int:
     def shown(config: list[int]) -> str:
         return ", ".join(f"{label}={c}" for label, c in zip(document["nodes"], config) if c) or "empty"
 
-    out.write(f"chip-firing on {tower.spec}, sink {document['sink']}; a node topples at "
-              + ", ".join(f"{label}:{t}" for label, t in zip(document["nodes"], document["thresholds"])) + "\n")
+    out.write(f"chip-firing on {tower.spec}, sink {document['sink']}; a node topples with at least "
+              + ", ".join(f"{t} on {label}" for label, t in zip(document["nodes"], document["thresholds"])) + "\n")
     out.write(f"configuration: {shown(document['configuration'])}\n")
     out.write(f"stable after {document['topplings']} topplings: {shown(document['stable'])}\n")
     out.write(f"recurrent in its class: {shown(document['recurrent'])}\n")
