@@ -218,10 +218,10 @@ class GramMatrix:
 def rational_roots(coefficients: list[int]) -> list[tuple[Fraction, int]]:
     """The rational roots of the polynomial with their multiplicities, ascending (python-flint's
     factorisation over Z)."""
-    return [(root, m) for root, m in _factors(coefficients)[0]]
+    return factorization(coefficients)[0]
 
 
-def _factors(coefficients: list[int]) -> tuple[list[tuple[Fraction, int]], list[tuple[list[int], int]]]:
+def factorization(coefficients: list[int]) -> tuple[list[tuple[Fraction, int]], list[tuple[list[int], int]]]:
     """(rational roots with multiplicities, other irreducible factors with multiplicities)."""
     import flint
 
@@ -243,4 +243,4 @@ def _factors(coefficients: list[int]) -> tuple[list[tuple[Fraction, int]], list[
 def other_factors(coefficients: list[int]) -> list[tuple[list[int], int]]:
     """The irreducible factors of degree ≥ 2 (integer coefficients, constant first) with their
     multiplicities: their roots are the irrational parameters where the determinant vanishes."""
-    return _factors(coefficients)[1]
+    return factorization(coefficients)[1]

@@ -19,7 +19,7 @@ from fractions import Fraction
 from math import ceil, log2
 from typing import TYPE_CHECKING, Callable, Hashable
 
-from engine.algebras.cells.gram import GramMatrix, _factors
+from engine.algebras.cells.gram import GramMatrix, factorization
 from engine.algebras.cells.half_diagrams import count_half_diagrams
 from engine.algebras.cells.labels import CellLabel, cell_labels, matching_note, node_of, read_cell_label
 from engine.algebras.cells.modules import CellModule
@@ -65,6 +65,8 @@ def estimated_work(level: "AlgebraLevel", label: CellLabel) -> int:
     dim = cell_dimension(level, label)
     if dim == 0:
         return 0
+    if level.kind == "symmetric-group":  # one half diagram: G′ is the identity, det 1
+        return dim**2 * 100
     free = level.vertices - sum(label.counts)
     per_row = free if level.kind == "partition" else free // 2
     primes = max(1, ceil(dim * log2(dim + 1) / 50))
@@ -89,7 +91,7 @@ def cell_answer(level: "AlgebraLevel", label: CellLabel | str, keep_matrix: bool
     module = CellModule(level, label)
     gram = GramMatrix.of(module, cancel)
     determinant = gram.determinant(cancel)
-    roots, others = _factors(determinant)
+    roots, others = factorization(determinant)
     x = level.parameter if level.parameter is not None else 0
     return CellAnswer(level, label, module.dimension, gram.rank_at(x), determinant, roots, others,
                       node_of(level, label), gram if keep_matrix else None)
