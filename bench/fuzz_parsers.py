@@ -153,27 +153,27 @@ def _parsers():
             return reader(path)
         return run
 
-    def paths(text: str):
-        for tower, encoding in encodings:
-            try:
-                encoding.path_from_text(tower, text)
-            except Exception as exc:  # noqa: BLE001 - re-raised unless it is a UserError
-                from engine.errors import UserError
+    def each(readers, text: str):
+        """Every reader on the text: a refusal when all refuse (each refusal checked)."""
+        from engine.errors import UserError
 
-                if not isinstance(exc, UserError):
-                    raise
+        refused = None
+        answered = False
+        for read in readers:
+            try:
+                read(text)
+                answered = True
+            except UserError as exc:
                 _check_message(exc)
+                refused = exc
+        if not answered and refused is not None:
+            raise refused
+
+    def paths(text: str):
+        each([lambda t, tw=tower, e=encoding: e.path_from_text(tw, t) for tower, encoding in encodings], text)
 
     def labels(text: str):
-        for tower, index in ((s4, 4), (s4, 3), (mixed, 2)):
-            try:
-                tower.parse(text, index)
-            except Exception as exc:  # noqa: BLE001
-                from engine.errors import UserError
-
-                if not isinstance(exc, UserError):
-                    raise
-                _check_message(exc)
+        each([lambda t, tw=tower, i=index: tw.parse(t, i) for tower, index in ((s4, 4), (s4, 3), (mixed, 2))], text)
 
     return {
         "numbers": lambda t: read_big(t, "n"),

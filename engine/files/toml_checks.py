@@ -46,6 +46,7 @@ def parse_toml(text: str, where: str) -> dict[str, Any]:
     """``tomllib.loads`` within the limits above (checked before and after parsing)."""
     if "\x00" in text:
         raise FileFormatError(f"{where}: not a TOML file (it holds a NUL byte)")
+    _pre_scan(text, where)
     long = _LONG_DIGITS.search(text)
     if long is not None:
         raise FileFormatError(
@@ -62,6 +63,28 @@ def parse_toml(text: str, where: str) -> dict[str, Any]:
     if depth > MAX_DEPTH:
         raise FileFormatError(f"{where}: nests arrays or tables {depth} levels deep (at most {MAX_DEPTH})")
     return data
+
+
+_STRINGS_AND_COMMENTS = re.compile(
+    r'"""[\s\S]*?"""|\'\'\'[\s\S]*?\'\'\'|"(?:[^"\\\n]|\\.)*"|\'[^\'\n]*\'|#[^\n]*'
+)
+_BRACKETS = re.compile(r"[\[\]{}]")
+
+
+def _pre_scan(text: str, where: str) -> None:
+    """Refuse, before tomllib reads it, text that nests brackets or dotted keys deeper than
+    MAX_DEPTH (tomllib builds dotted keys in time quadratic in their length).  Strings and comments
+    are blanked first, so brackets and dots inside them do not count."""
+    bare = _STRINGS_AND_COMMENTS.sub('""', text)
+    depth = 0
+    for found in _BRACKETS.finditer(bare):
+        depth += 1 if found.group() in "[{" else -1
+        if depth > MAX_DEPTH:
+            raise FileFormatError(f"{where}: nests arrays or tables deeper than {MAX_DEPTH} levels")
+    for line in bare.splitlines():
+        key = line if line.lstrip().startswith("[") else line.partition("=")[0]
+        if key.count(".") > MAX_DEPTH:
+            raise FileFormatError(f"{where}: a dotted key of more than {MAX_DEPTH} parts (tables nest at most {MAX_DEPTH} deep)")
 
 
 def nesting_depth(value: Any) -> int:
