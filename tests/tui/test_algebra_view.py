@@ -74,3 +74,18 @@ async def test_a_family_without_an_algebra_says_so() -> None:
         await pilot.press("a")
         await settle(pilot)
         assert not isinstance(app.screen, AlgebraView)
+
+
+async def test_details_show_the_nodes_cell_module() -> None:
+    # S_3 at level 3: the trivial node (3) has multiplicity Σ_{t≤3} S(3,t) = Bell(3) = 5 (one S_3-orbit
+    # of [3]^3 per set partition; OEIS A000110); its cell module is the one of λ̄ = () of P_3(3) (the
+    # contract's matching (N − |λ̄|, λ̄)), spanned by the half diagrams with no propagating block:
+    # the set partitions of [3], Bell(3) = 5 of them
+    app = app_on("symmetric:n=3", search_faithful=False)
+    async with app.run_test(size=(120, 40)) as pilot:
+        await settle(pilot)
+        await go_to_level(pilot, "3")
+        details = str(app.screen.query_one("#details-text").render())
+        assert app.state.node == (3,)
+        assert "cell module () of P_3(3), dimension 5" in " ".join(details.split())
+        assert "rank of its Gram form at x = 3: 5 = m ✓" in " ".join(details.split())

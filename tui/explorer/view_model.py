@@ -238,7 +238,31 @@ def node_details(state: ExplorerState, data: LevelData | None,
         note=state.notes.get((index, node), ""),
         bookmarked=(index, node) in state.bookmarks,
         formula=diagram.formula(index, node),
+        cell=cell_line(diagram, index, node, data.multiplicity.get(node, 0)),
     )
+
+
+def cell_line(diagram: Diagram, index: int, node: Node, multiplicity: int) -> str | None:
+    """The node's cell module: its label and dimension, the rank of its Gram form at the parameter
+    (where quick) and whether it equals the multiplicity; None where the family has no algebra."""
+    algebra = diagram.algebra(index)
+    if algebra is None:
+        return None
+    from engine.algebras.cells.node_cell import node_cell
+    from engine.errors import UserError
+
+    try:
+        found = node_cell(algebra, node)
+    except (UserError, MemoryError, RecursionError):
+        return None
+    if found is None:
+        return f"none of {algebra.name} has this node as its head"
+    x = "0" if algebra.parameter is None else str(algebra.parameter)
+    head = f"{found.label} of {algebra.name}, dimension {found.dimension:,}"
+    if found.rank is None:
+        return f"{head}; its Gram rank at x = {x}: in the algebra view (a, then c)"
+    agree = "= m ✓" if found.rank == multiplicity else f"≠ m = {multiplicity} ✗"
+    return f"{head}; rank of its Gram form at x = {x}: {found.rank:,} {agree}"
 
 
 def sums_line(state: ExplorerState, sums: LevelSums | None, unfaithful: tuple[int, int | None] | None) -> SumsLine | None:

@@ -27,6 +27,8 @@ class NodeDetails:
     note: str = ""
     bookmarked: bool = False
     formula: str | None = None
+    #: the node's cell module of the level's diagram algebra, one line (None: the family has none)
+    cell: str | None = None
 
 
 def _neighbours(text: Text, title: str, level: str | None, items: list[tuple[str, int]], width: int) -> None:
@@ -77,6 +79,9 @@ def details_text(info: NodeDetails | None, width: int, height: int, unfold: bool
             text.append(" (z unfolds)\n", style="italic")
         else:
             text.append(formula + "\n")
+    if info.cell:
+        text.append("cell module ", style="bold")
+        text.append(info.cell + "\n")
     _neighbours(text, "parents", info.parent_level, info.parents, width)
     _neighbours(text, "children", info.child_level, info.children, width)
     drawing = draw_label(info.label, width, max(height // 2, 5))
