@@ -208,6 +208,19 @@ class Diagram:
             found = self._public[index] = self._counts.level(index)
         return found
 
+    def sorted_nodes(self, index: int, level: dict[Node, int]) -> list[Node]:
+        """The nodes of ``level`` (level ``index``, built or not) in display order; kept only if
+        they were already (a streamed document does not keep every level's order)."""
+        found = self._sorted.get(index)
+        return found if found is not None else self.tower.sort_nodes(level, index)
+
+    def dimension_lookup(self, index: int) -> Callable[[Node], int]:
+        """node → dimension at a level: from the dimensions kept for the built levels' node space,
+        else the tower's formula."""
+        if index <= self.built:
+            return self._counts.dimension_lookup(index)
+        return lambda node: self.tower.dimension(index, node)
+
     def nodes(self, index: int) -> list[Node]:
         """The nodes of a level in the tower's display order."""
         found = self._sorted.get(index)
@@ -265,8 +278,10 @@ class Diagram:
             return
         if start <= self.built or self._jump is None:
             self.ensure(upto, progress, cancel)
-            for index in range(start, upto + 1):
-                yield index, self.level(index)
+            public, counts = self._public, self._counts
+            for index in range(start, upto + 1):  # not kept: a streamed document holds one level
+                found = public.get(index)
+                yield index, found if found is not None else counts.level(index)
             return
         self.check_digits(upto)
         self.check_stream(start, upto, printed=False)

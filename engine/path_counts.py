@@ -212,6 +212,12 @@ class PathCounts:
                 dims.extend([dimension(index, nodes[j]) for j in range(len(dims), len(values))])
         return dims
 
+    def dimension_lookup(self, index: int) -> Callable[[Node], int]:
+        """node → dimension for the nodes of a built level (from ``dimensions``)."""
+        space, _ = self.levels[index]
+        dims, ids = self.dimensions(index), space.ids
+        return lambda node: dims[ids[node]]
+
     def sums(self, index: int, cancel=None) -> tuple[int, int, int]:
         """Σm, Σm², Σm·dim of a built level, at C speed over its lists."""
         _, values = self.levels[index]

@@ -3,6 +3,7 @@
 from __future__ import annotations
 
 from pathlib import PurePath
+from typing import TextIO
 from typing import TYPE_CHECKING
 
 from engine.diagram import Diagram
@@ -62,3 +63,19 @@ def render(diagram: Diagram, upto: int, fmt: str, figure: "FigureOptions | None"
 
         return json.dumps(levels_document(diagram, upto), ensure_ascii=False, indent=1) + "\n"
     raise UserError(f"unknown format {fmt!r} (known: {', '.join(FORMATS)})")
+
+
+def write(diagram: Diagram, upto: int, fmt: str, stream: TextIO) -> None:
+    """``render`` written to a stream; JSON and CSV level by level, never holding the document
+    (the same text as ``render``)."""
+    if fmt == "json":
+        from engine.export.documents import write_levels_json
+
+        write_levels_json(diagram, upto, stream, indent=1)
+        stream.write("\n")
+    elif fmt == "csv":
+        from engine.export.csv_levels import write_csv
+
+        write_csv(diagram, upto, stream)
+    else:
+        stream.write(render(diagram, upto, fmt))

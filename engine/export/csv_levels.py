@@ -4,15 +4,20 @@ from __future__ import annotations
 
 import csv
 import io
+from typing import TextIO
 
 from engine.diagram import Diagram
 from engine.export.documents import level_rows
 
 
+def write_csv(diagram: Diagram, upto: int, stream: TextIO, start: int = 0) -> None:
+    """Write the rows level by level (one level's rows held at a time)."""
+    writer = csv.writer(stream, lineterminator="\n")
+    writer.writerow(["level", "label", "multiplicity", "dimension"])
+    writer.writerows(level_rows(diagram, upto, start))
+
+
 def to_csv(diagram: Diagram, upto: int, start: int = 0) -> str:
     out = io.StringIO()
-    writer = csv.writer(out, lineterminator="\n")
-    writer.writerow(["level", "label", "multiplicity", "dimension"])
-    for row in level_rows(diagram, upto, start):
-        writer.writerow(row)
+    write_csv(diagram, upto, out, start)
     return out.getvalue()

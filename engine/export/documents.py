@@ -3,7 +3,8 @@ contract (shared guide cli-contract.md); the JSON and CSV writers and the CLI pr
 
 from __future__ import annotations
 
-from typing import Any, Iterator
+import json
+from typing import Any, Iterator, TextIO
 
 from engine.diagram import CancelToken, Diagram, Progress
 from engine.errors import LabelError
@@ -12,10 +13,13 @@ from engine.tower import Node
 
 
 def node_values(diagram: Diagram, index: int, level: dict[Node, int]) -> Iterator[tuple[str, int, int]]:
-    """(label, multiplicity, dimension) of every node of a level, in display order."""
+    """(label, multiplicity, dimension) of every node of a level, in display order (nothing is
+    kept: a streamed document holds one level at a time)."""
     tower = diagram.tower
-    for node in tower.sort_nodes(level, index) if index > diagram.built else diagram.nodes(index):
-        yield tower.format(node), level[node], tower.dimension(index, node)
+    label = tower.format
+    dimension = diagram.dimension_lookup(index)
+    for node in diagram.sorted_nodes(index, level):
+        yield label(node), level[node], dimension(node)
 
 
 def level_entry(diagram: Diagram, index: int, level: dict[Node, int]) -> dict[str, Any]:
@@ -58,6 +62,37 @@ def levels_document(
         "levels": list(level_entries(diagram, start, upto, progress, cancel)),
         "first_unfaithful": first_unfaithful_json(diagram),
     }
+
+
+def write_levels_json(
+    diagram: Diagram, upto: int, stream: TextIO, start: int = 0, indent: int | None = None,
+    progress: Progress | None = None, cancel: CancelToken | None = None,
+) -> None:
+    """Write ``levels_document`` as JSON level by level: the same text as ``json.dumps(document,
+    ensure_ascii=False, indent=indent)``, without holding more than one level's text."""
+    def dumps(value: Any) -> str:
+        return json.dumps(value, ensure_ascii=False, indent=indent)
+
+    if indent is None:
+        head, between, tail, shift = "{" + '"tower": ' + dumps(diagram.tower.spec) + ', "levels": [', ", ", "], ", ""
+        last = '"first_unfaithful": '
+    else:
+        pad = " " * indent
+        shift = "\n" + pad * 2
+        head = "{\n" + pad + '"tower": ' + dumps(diagram.tower.spec) + ",\n" + pad + '"levels": [' + shift
+        between, tail = "," + shift, "\n" + pad + "],\n" + pad
+        last = '"first_unfaithful": '
+    stream.write(head)
+    first = True
+    for entry in level_entries(diagram, start, upto, progress, cancel):
+        text = dumps(entry)
+        if shift and indent is not None:
+            text = text.replace("\n", shift)
+        stream.write(text if first else between + text)
+        first = False
+    if first:  # no level (never for start ≤ upto): json.dumps writes an empty list as []
+        raise ValueError("no levels to write")
+    stream.write(tail + last + dumps(first_unfaithful_json(diagram)) + ("}" if indent is None else "\n}"))
 
 
 def level_rows(diagram: Diagram, upto: int, start: int = 0) -> Iterator[tuple[str, str, int, int]]:

@@ -18,6 +18,7 @@ import secrets
 import stat
 import threading
 from pathlib import Path
+from typing import IO, Iterator
 
 from engine.errors import UserError
 
@@ -121,6 +122,16 @@ def write_text_atomic(path: str | os.PathLike[str], text: str) -> Path:
 
 
 def write_bytes_atomic(path: str | os.PathLike[str], data: bytes) -> Path:
+    with open_atomic(path, binary=True) as (handle, target):
+        handle.write(data)
+    return target
+
+
+@contextlib.contextmanager
+def open_atomic(path: str | os.PathLike[str], binary: bool = False) -> Iterator[tuple[IO, Path]]:
+    """``with open_atomic(path) as (handle, target):`` write to ``handle`` (UTF-8 text, or bytes);
+    the file appears at ``target`` (a symlink's target) only when the block ends without error.
+    For writers that stream a large document instead of holding it."""
     target = resolve_target(path)
     folder = target.parent if str(target.parent) else Path(".")
     clean_leftovers(folder)
@@ -135,8 +146,9 @@ def write_bytes_atomic(path: str | os.PathLike[str], data: bytes) -> Path:
     except OSError as exc:  # a folder we may not write in (permissions, read-only or virtual file system)
         raise _cannot_write(target, exc) from None
     try:
-        with os.fdopen(fd, "wb") as handle:
-            handle.write(data)
+        opened = os.fdopen(fd, "wb") if binary else os.fdopen(fd, "w", encoding="utf-8", newline="")
+        with opened as handle:
+            yield handle, target
             handle.flush()
             os.fchmod(handle.fileno(), mode)
             os.fsync(handle.fileno())
@@ -147,4 +159,3 @@ def write_bytes_atomic(path: str | os.PathLike[str], data: bytes) -> Path:
         if isinstance(exc, OSError):
             raise _cannot_write(target, exc) from None
         raise
-    return target

@@ -42,6 +42,7 @@ def run(args: argparse.Namespace) -> int:
         fmt = format_for_path(args.output)
     diagram = open_diagram(args.spec)
     upto = level_index(diagram.tower, args.to)
+    diagram.check_size(upto, printed=True)
     build_levels(diagram, upto)
     options = None
     if fmt in ("tikz", "svg"):
@@ -56,6 +57,17 @@ def run(args: argparse.Namespace) -> int:
               f"(the plain order has {layout.plain_crossings})", file=sys.stderr)
     elif args.young or args.width or args.highlight or args.no_legend:
         raise UserError("--young, --width, --highlight and --no-legend are for pictures (.tikz, .svg)")
+    if fmt in ("json", "csv"):  # streamed level by level (engine.export.write), never held whole
+        from engine.export import write
+        from engine.files.atomic import open_atomic
+
+        if args.output == "-":
+            write(diagram, upto, fmt, sys.stdout)
+        else:
+            with open_atomic(args.output) as (handle, path):
+                write(diagram, upto, fmt, handle)
+            print(f"wrote {path} ({fmt}, levels 0..{args.to})", file=sys.stderr)
+        return 0
     text = render(diagram, upto, fmt, options)
     if args.output == "-":
         sys.stdout.write(text)

@@ -6,7 +6,7 @@ from __future__ import annotations
 import argparse
 import sys
 
-from tui.cli.support import build_levels, level_index, open_diagram, print_json
+from tui.cli.support import build_levels, level_index, open_diagram
 
 
 def add_commands(sub: argparse._SubParsersAction) -> None:
@@ -48,15 +48,19 @@ def run(args: argparse.Namespace) -> int:
         if start > upto:
             raise UserError(f"--from {args.start} is after --to {args.to}")
     if start <= diagram.built or not diagram.can_jump:
+        diagram.check_size(upto, printed=not args.sums_only)
         build_levels(diagram, upto)
-    if args.json:
-        from engine.export.documents import levels_document
+    else:
+        diagram.check_stream(start, upto, printed=not args.sums_only)
+    if args.json:  # streamed: one level's text at a time, the bytes of json.dumps(levels_document)
+        from engine.export.documents import write_levels_json
 
-        print_json(levels_document(diagram, upto, start=start))
+        write_levels_json(diagram, upto, sys.stdout, start)
+        sys.stdout.write("\n")
     elif args.csv:
-        from engine.export.csv_levels import to_csv
+        from engine.export.csv_levels import write_csv
 
-        sys.stdout.write(to_csv(diagram, upto, start))
+        write_csv(diagram, upto, sys.stdout, start)
     else:
         from tui.cli.tables import print_levels
 
