@@ -2,9 +2,7 @@
 
 from __future__ import annotations
 
-from pathlib import PurePath
-from typing import TextIO
-from typing import TYPE_CHECKING
+from typing import TYPE_CHECKING, TextIO
 
 from engine.diagram import Diagram
 from engine.errors import UserError
@@ -25,6 +23,8 @@ FORMATS: dict[str, tuple[str, str]] = {
 
 def format_for_path(path: str) -> str:
     """The format a file name's extension asks for; a UserError when it names none."""
+    from pathlib import PurePath  # not at start-up: only exports to a file need it
+
     suffix = PurePath(path).suffix.lower()
     for name, (extension, _) in FORMATS.items():
         if suffix == extension:

@@ -5,29 +5,34 @@ from __future__ import annotations
 import json
 import sys
 import time
-from typing import Any, Callable, TypeVar
+from typing import TYPE_CHECKING, Any, Callable, TypeVar
 
-from engine.diagram import Diagram
-from engine.levels import parse_level
-from engine.specs import parse_spec
-from engine.tower import Node, Tower
+if TYPE_CHECKING:  # the engine is imported by the functions that use it: `--help` and a
+    # command's parser start without it (bench/bench_startup.py)
+    from engine.diagram import Diagram
+    from engine.tower import Node, Tower
 
 T = TypeVar("T")
 
 
-def open_diagram(spec: str) -> Diagram:
+def open_diagram(spec: str) -> "Diagram":
+    from engine.diagram import Diagram
+    from engine.specs import parse_spec
+
     return Diagram(parse_spec(spec))
 
 
-def level_index(tower: Tower, text: str) -> int:
+def level_index(tower: "Tower", text: str) -> int:
+    from engine.levels import parse_level
+
     return tower.index_of(parse_level(text))
 
 
-def node_at(tower: Tower, index: int, label: str) -> Node:
+def node_at(tower: "Tower", index: int, label: str) -> "Node":
     return tower.parse(label, index)
 
 
-def build_levels(diagram: Diagram, index: int) -> None:
+def build_levels(diagram: "Diagram", index: int) -> None:
     """Build the diagram up to ``index`` (the size guard refuses first), with a delayed progress bar."""
     DelayedProgress(f"building {diagram.tower.spec}").run(lambda bar: diagram.ensure(index, progress=bar))
 
