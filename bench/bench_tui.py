@@ -1,5 +1,7 @@
 """Speed of the explorer (issue: the explorer).  Targets: first paint under 1 s; a key press to the
-repaint under 50 ms on a 200,000-node level (symmetric:n=80 at level 40).
+repaint under 50 ms on a 200,000-node level (symmetric:n=80 at level 40); at 160x48, level 50 of
+general-linear:n=30 shown under 15 s, each → there under 1 s once the level exists, peak memory
+under 1 GB (``--depth``).
 
     uv run python bench/bench_tui.py            # both measures
     uv run python bench/bench_tui.py --quick    # first paint only
@@ -14,6 +16,7 @@ terminal write is not included.  The level is built first (not timed here: see b
 from __future__ import annotations
 
 import argparse
+import asyncio
 import statistics
 import subprocess
 import sys
@@ -116,10 +119,55 @@ async def key_to_repaint(spec: str, level: int, presses: int) -> dict[str, list[
     return results
 
 
+async def steps_at_depth(spec: str, level: int, steps: int) -> None:
+    """Reach ``level`` at 160x48 (the asked level shown first), then step → ``steps`` times, each
+    timed from the key to the level shown; the side panes' levels build in the background."""
+    import contextlib
+    import resource
+
+    from textual.worker import WorkerCancelled
+
+    from tui.explorer.app import ExplorerApp
+    from tui.explorer.state import state_for_spec
+
+    sys.set_int_max_str_digits(0)
+    app = ExplorerApp(state_for_spec(spec), search_faithful=False, autosave=False)
+    async with app.run_test(size=(160, 48)) as pilot:
+        await pilot.pause()
+        start = time.perf_counter()
+        app.go(level)
+        while app.state.index != level:
+            await asyncio.sleep(0.01)
+        print(f"{spec}: level {level} shown {time.perf_counter() - start:.1f} s after the jump key   target < 15 s")
+        while app.state.diagram.built < level + 2:  # the side panes' levels, built in the background
+            await asyncio.sleep(0.05)
+        print(f"  side panes' levels ready {time.perf_counter() - start:.1f} s after it")
+        for n in range(steps):
+            while app.state.diagram.built < app.state.index + 1:
+                await asyncio.sleep(0.05)
+            target = app.state.index + 1
+            t0 = time.perf_counter()
+            app.step_level(1)
+            while app.state.index != target:
+                await asyncio.sleep(0.002)
+            print(f"  → to level {target} (built): {(time.perf_counter() - t0) * 1000:.0f} ms   target < 1000 ms")
+        app.cancel_build()
+        with contextlib.suppress(WorkerCancelled):
+            await app.workers.wait_for_complete()
+    peak = resource.getrusage(resource.RUSAGE_SELF).ru_maxrss / 1024
+    print(f"  peak memory {peak:,.0f} MB   target < 1024 MB")
+
+
 def main() -> None:
     parser = argparse.ArgumentParser(description=__doc__.splitlines()[0])
     parser.add_argument("--quick", action="store_true", help="first paint only")
+    parser.add_argument("--depth", action="store_true", help="only the steps at depth (general-linear:n=30, level 50)")
     args = parser.parse_args()
+    if args.depth:
+        import asyncio
+
+        asyncio.run(steps_at_depth("general-linear:n=30", 50, 2))
+        return
     paints = first_paint(5)
     print(f"first paint (demo session, 80x24): median {statistics.median(paints) * 1000:.0f} ms, "
           f"worst {max(paints) * 1000:.0f} ms   target < 1000 ms")
