@@ -126,6 +126,8 @@ class Diagram:
             if start > 0:
                 edges = max(0, edges - (guard.edges(start - 1) or 0))
             nodes = guard.nodes(upto) if guard.nodes is not None else edges
+            if start > 0 and guard.nodes is not None:  # levels start..upto only (a jump gives start)
+                nodes = max(0, nodes - guard.nodes(start - 1))
         if guard is not None and guard.digits is not None:
             digits = guard.digits(upto)
         else:
