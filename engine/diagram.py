@@ -15,6 +15,7 @@ from __future__ import annotations
 
 import threading
 from dataclasses import dataclass
+from math import log10
 from typing import Callable, Hashable, Iterator, Protocol
 
 from engine.capabilities import AlgebraLevel, ClosedForm, DiagramAlgebra, LevelJump, SizeGuard
@@ -131,9 +132,18 @@ class Diagram:
         if guard is not None and guard.digits is not None:
             digits = guard.digits(upto)
         else:
-            digits = digits_of(max(1, self.tower.tensor_dimension(upto)))
+            digits = self._tensor_digits(upto)
         extra = guard.extra(upto) if guard is not None and guard.extra is not None else 0
         return estimate(edges, nodes, digits, extra, printed, kept, upto - start + 1)
+
+    def _tensor_digits(self, index: int) -> int:
+        """Digits of the tensor dimension at ``index``, by logarithms past a few thousand levels
+        (it is (dim V)^k: computing it exactly at level 10^23 would never finish)."""
+        if index <= 4096:
+            return digits_of(max(1, self.tower.tensor_dimension(index)))
+        period = self.tower.steps_per_unit
+        whole = max(2, self.tower.tensor_dimension(period))
+        return int((index // period + 1) * log10(whole)) + 1
 
     def check_size(self, index: int, printed: bool = False) -> None:
         """Raise TooLarge when building up to ``index`` is estimated to exceed the edge limit, or

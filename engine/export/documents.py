@@ -3,10 +3,10 @@ contract (shared guide cli-contract.md); the JSON and CSV writers and the CLI pr
 
 from __future__ import annotations
 
-import json
 from typing import Any, Iterator, TextIO
 
 from engine.diagram import CancelToken, Diagram, Progress
+from engine.export import json_text
 from engine.errors import LabelError
 from engine.levels import format_level, level_to_json
 from engine.tower import Node
@@ -71,7 +71,7 @@ def write_levels_json(
     """Write ``levels_document`` as JSON level by level: the same text as ``json.dumps(document,
     ensure_ascii=False, indent=indent)``, without holding more than one level's text."""
     def dumps(value: Any) -> str:
-        return json.dumps(value, ensure_ascii=False, indent=indent)
+        return json_text.dumps(value, indent=indent)
 
     if indent is None:
         head, between, tail, shift = "{" + '"tower": ' + dumps(diagram.tower.spec) + ', "levels": [', ", ", "], ", ""

@@ -357,7 +357,8 @@ def test_bad_files_are_one_line_and_exit_2(capsys, bad_files, argv):
 
 def test_refusals_name_their_estimate(capsys):
     _, _, err = main_output(capsys, "levels", "symmetric:n=80", "--to", "200")
-    assert re.search(r"about \d\.\d\de\+\d+ edges", err)
+    # the estimate: edges, and the time and memory they would take
+    assert re.search(r"would walk \d\.\d\de\+\d+ edges", err) and re.search(r"about .* GB", err)
     _, _, err = main_output(capsys, "node", "symmetric:n=12", "--level", "10000000000", "--label", "(6,3,3)")
     assert re.search(r"about \d\.\d\de\+\d+ digits", err)
 

@@ -2,7 +2,6 @@
 
 from __future__ import annotations
 
-import json
 import sys
 import time
 from typing import TYPE_CHECKING, Any, Callable, TypeVar
@@ -38,7 +37,10 @@ def build_levels(diagram: "Diagram", index: int) -> None:
 
 
 def print_json(document: Any) -> None:
-    sys.stdout.write(json.dumps(document, ensure_ascii=False) + "\n")
+    """One JSON object on stdout, exact ints of any size (written fast: ``engine.export.json_text``)."""
+    from engine.export.json_text import dumps
+
+    sys.stdout.write(dumps(document) + "\n")
 
 
 def console():
