@@ -256,6 +256,8 @@ def cell_line(diagram: Diagram, index: int, node: Node, multiplicity: int) -> st
     except (UserError, MemoryError, RecursionError):
         return None
     if found is None:
+        if algebra.vertices > 8:
+            return f"of {algebra.name}: in the algebra view (a, then c)"
         return f"none of {algebra.name} has this node as its head"
     x = "0" if algebra.parameter is None else str(algebra.parameter)
     head = f"{found.label} of {algebra.name}, dimension {found.dimension:,}"

@@ -17,6 +17,9 @@ if TYPE_CHECKING:
 
 #: estimated work (``estimated_work`` units) computed at once for the details pane (~10 ms)
 QUICK_WORK = 10**7
+#: beyond this many vertices per row the cell modules are not looked at from the details pane
+#: (their dimensions are counted by listing half diagrams and tableaux)
+QUICK_VERTICES = 8
 
 
 @dataclass(frozen=True)
@@ -29,7 +32,10 @@ class NodeCell:
 
 
 def node_cell(level: "AlgebraLevel", node: Hashable, work_limit: int = QUICK_WORK) -> NodeCell | None:
-    """The cell module whose head is ``node``'s module at x = N, or None when no label matches."""
+    """The cell module whose head is ``node``'s module at x = N, or None when no label matches or
+    the level has more than ``QUICK_VERTICES`` vertices per row."""
+    if level.vertices > QUICK_VERTICES:
+        return None
     from engine.algebras.cells.gram import GramMatrix
     from engine.algebras.cells.modules import CellModule
 
