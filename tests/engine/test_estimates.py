@@ -39,7 +39,10 @@ def test_estimates_are_within_a_factor_ten_at_every_level(spec):
     guard = tower.capability(SizeGuard)
     assert guard is not None and guard.nodes is not None
     diagram = Diagram(tower)
-    top = 60 if tower.max_index is None else tower.max_index
+    # the classical towers with large N grow fast: 40 levels keep the suite quick and still pass the
+    # stable range (level ≥ N) where the estimates change form
+    deep = 40 if spec.split(":")[0] in ("orthogonal", "general-linear", "symplectic") and tower.n > 4 else 60
+    top = deep if tower.max_index is None else tower.max_index
     edges = nodes = 0
     for index in range(top + 1):
         level = diagram.level(index)
