@@ -95,7 +95,7 @@ class MainScreen(Screen[None]):
         if app.demo:
             parts.append("demo session")
         elif state.path is not None:
-            parts.append(str(state.path))
+            parts.append(shown_path(state.path))
         else:
             parts.append("not saved yet")
         text = "  ·  ".join(parts)
@@ -274,3 +274,19 @@ class MainScreen(Screen[None]):
 
     def action_cancel_build(self) -> None:
         self.explorer.cancel_build()
+
+
+def shown_path(path) -> str:  # noqa: ANN001 - a pathlib.Path
+    """A session file as the header shows it: relative to the working folder when inside it, with
+    ~ for the home folder otherwise (the same wherever the project is checked out)."""
+    from pathlib import Path
+
+    full = Path(path)
+    try:
+        return str(full.resolve().relative_to(Path.cwd().resolve()))
+    except (ValueError, OSError):
+        pass
+    try:
+        return "~/" + str(full.resolve().relative_to(Path.home().resolve()))
+    except (ValueError, OSError, RuntimeError):
+        return str(full)
