@@ -2,7 +2,7 @@
 
 A diagram of an algebra in the tower cuts into a top half (how the top vertices are joined among
 themselves), a bottom half, and a bijection between the *propagating* blocks (those meeting both
-rows) of the two halves (Graham and Lehrer, "Cellular algebras", Invent. Math. 1996, §4–§6;
+rows) of the two halves (the 1996 paper that defined cellular algebras, §4–§6;
 a 2005 survey of partition algebras, §3, for those).
 A half diagram on r vertices 0..r−1 is ``(blocks, marks)``: a set partition of the vertices (blocks
 ascending, sorted by their smallest vertex) and, for each block, its mark:

@@ -2,7 +2,7 @@
 
 A cell module is labelled by one partition per colour of propagating blocks (two for walled
 Brauer: α for the letter v, β for d), so that the Specht module of S_t (S_a × S_b) it carries is
-the one of those partitions (Graham and Lehrer 1996; Martin 1994 for the partition algebras;
+the one of those partitions (the 1996 definition of cellular algebras; Martin 1994 for the partition algebras;
 a 2008 study of the walled Brauer algebras for those).
 
 | kind | cell labels at level k | read on input as | matched to the tower's node at x = N |

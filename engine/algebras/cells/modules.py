@@ -1,5 +1,5 @@
 """Cell modules: the basis (half diagram ⊗ Specht basis vector), the action of a diagram, and the
-bilinear form (Graham and Lehrer, "Cellular algebras", Invent. Math. 1996, §1 and §4;
+bilinear form (the 1996 paper that defined cellular algebras, §1 and §4;
 Martin 1994 and a 2005 survey for partition algebras).
 
 The cell module W(λ) of a label λ with t propagating blocks has the basis h ⊗ v_T: h a half

@@ -1,7 +1,6 @@
 """The cell module belonging to one node of the tower, for the explorer's details: its label, its
 dimension (by formula) and, where cheap, the rank of its Gram form at the level's parameter, which
-equals the node's multiplicity (cellular algebras: Graham and Lehrer, *Cellular algebras*, Invent.
-Math. 123, 1996; the simple head of the cell module at x = N is the node's centralizer module).
+equals the node's multiplicity (the theory of cellular algebras, defined in 1996; the simple head of the cell module at x = N is the node's centralizer module).
 How labels match nodes is ``engine.algebras.cells.labels.node_of``."""
 
 from __future__ import annotations

@@ -3,7 +3,7 @@
 module's dimension, Gram rank and the tower's node it belongs to.
 
 A cellular algebra is semisimple exactly when the form of every cell module is non-degenerate
-(Graham and Lehrer, "Cellular algebras", Invent. Math. 1996, Theorem 3.8), so the algebra of the
+(the 1996 paper that defined cellular algebras, Theorem 3.8), so the algebra of the
 level fails to be semisimple at x exactly at the roots of the cells' Gram determinants.  At x = N
 the rank of a cell's Gram matrix is the dimension of its simple quotient; when the cell's label
 matches a node of the tower (``labels.node_of``), that dimension is the node's multiplicity (the

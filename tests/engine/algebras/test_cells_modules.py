@@ -43,7 +43,7 @@ def _algebra_dimension(level) -> int:
 
 @pytest.mark.parametrize("level", LEVELS, ids=lambda lv: lv.name + (lv.word or ""))
 def test_sum_of_squares_of_cell_dimensions_is_the_dimension(level):
-    # common practice (cellular algebras, Graham and Lehrer 1996): Σ_λ (dim W(λ))² = dim A
+    # common practice (cellular algebras, the 1996 definition of cellular algebras): Σ_λ (dim W(λ))² = dim A
     total = 0
     for label in cell_labels(level):
         module = CellModule(level, label)
@@ -81,7 +81,7 @@ CASES = [("brauer", 6, "(3,1)", ""), ("brauer", 5, "(2,1)", ""), ("partition", 4
 
 @pytest.mark.parametrize("kind,r,label,word", CASES)
 def test_action_is_a_module_and_the_form_is_invariant(kind, r, label, word):
-    # common practice (Graham and Lehrer 1996, §1–2): (d1·d2)·v = d1·(d2·v) with the loop factor, and
+    # common practice (the 1996 definition of cellular algebras, §1–2): (d1·d2)·v = d1·(d2·v) with the loop factor, and
     # ⟨d·a, b⟩ = ⟨a, d*·b⟩ for the diagram d* turned upside down; checked on whole matrices
     level = level_of(kind, r, word=word)
     module = CellModule(level, read_cell_label(level, label))

@@ -4,7 +4,7 @@ of the tower's node it belongs to, on every node of every family with a diagram 
 The multiplicities come from the Bratteli diagram (path counting, ``engine.diagram``); the ranks
 from exact linear algebra on the cell modules: independent computations.  That the simple
 modules of the centralizer are the heads of the cell modules is the double centralizer theorem
-with the cellular structure (Graham and Lehrer 1996; common practice)."""
+with the cellular structure (the 1996 definition of cellular algebras; common practice)."""
 
 from __future__ import annotations
 
