@@ -36,7 +36,7 @@ if TYPE_CHECKING:
     pass
 
 Entry = tuple[int, Fraction]  # x^c with a rational coefficient
-_PRIME_START = (1 << 26) - 1
+_PRIME_START = 1 << 50  # python-flint's nmod_mat is fastest near 50 bits (bench_cells)
 
 
 def _primes(count_bits: int, avoid: int, start: int = _PRIME_START):
@@ -95,6 +95,14 @@ class GramMatrix:
 
     def coefficient_bound_squared(self) -> Fraction:
         """H² = ∏_rows Σ_columns (Σ |coefficients|)²."""
+        if self.denominators == 1:
+            whole = 1
+            for row in self.rows:
+                sums_int: dict[int, int] = {}
+                for j, _, q in row:
+                    sums_int[j] = sums_int.get(j, 0) + abs(q.numerator)
+                whole *= sum(s * s for s in sums_int.values())
+            return Fraction(whole)
         total = Fraction(1)
         for row in self.rows:
             sums: dict[int, Fraction] = {}
@@ -196,18 +204,22 @@ class GramMatrix:
             for c, m in zip(powers[1:], matrices[1:]):
                 total = total + m * pow(a, c, p)
             values.append(int(total.det()))
-        # forward differences: Δ^m y(0); then Σ Δ^m y(0)/m!·x(x−1)…(x−m+1) by Horner's rule
-        differences = []
-        column = values
-        while column:
-            differences.append(column[0])
-            column = [(b - a) % p for a, b in zip(column, column[1:])]
+        # Newton's form: Δ^m y(0)/m! is the t^m coefficient of e^(−t)·Σ_j y_j t^j/j! (the binomial
+        # transform, Graham–Knuth–Patashnik, Concrete Mathematics §5.3); then Horner's rule on
+        # Σ_m Δ^m y(0)/m!·x(x−1)…(x−m+1).
+        size = len(values)
+        inverse_factorials = [1] * size
         factorial = 1
-        scaled = []
-        for m, d in enumerate(differences):
-            if m:
-                factorial = factorial * m % p
-            scaled.append(d * pow(factorial, -1, p) % p)
+        for m in range(1, size):
+            factorial = factorial * m % p
+        inverse = pow(factorial, -1, p)
+        for m in range(size - 1, -1, -1):
+            inverse_factorials[m] = inverse
+            inverse = inverse * m % p if m else inverse
+        ordinary = flint.nmod_poly([y * f % p for y, f in zip(values, inverse_factorials)], p)
+        alternating = flint.nmod_poly([f if m % 2 == 0 else -f % p for m, f in enumerate(inverse_factorials)], p)
+        product = ordinary.mul_low(alternating, size)
+        scaled = [int(product[m]) if m <= product.degree() else 0 for m in range(size)]
         poly = flint.nmod_poly([scaled[-1]], p)
         for m in range(len(scaled) - 2, -1, -1):
             poly = poly * flint.nmod_poly([-m % p, 1], p) + scaled[m]

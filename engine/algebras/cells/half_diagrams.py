@@ -94,17 +94,41 @@ def partial_matchings(r: int, allowed=lambda a, b: True) -> Iterator[tuple[tuple
     yield from rec(0, [])
 
 
-def _planar(blocks: tuple[tuple[int, ...], ...]) -> bool:
-    """No two arcs cross and no arc passes over a single vertex (through lines reach the edge)."""
-    arcs = [b for b in blocks if len(b) == 2]
-    singles = [b[0] for b in blocks if len(b) == 1]
-    for a, b in arcs:
-        if any(a < s < b for s in singles):
-            return False
-        for c, d in arcs:
-            if a < c < b < d:
-                return False
-    return True
+def matchings_with_singles(r: int, t: int, planar: bool = False) -> Iterator[tuple[tuple[int, ...], ...]]:
+    """The partial matchings of 0..r−1 with exactly t singletons (planar: no two arcs cross and no
+    arc passes over a singleton), in the order of ``partial_matchings`` filtered, but pruned: a
+    branch stops as soon as the singletons can no longer come out at t."""
+    used = [False] * r
+    blocks: list[tuple[int, ...]] = []
+
+    def rec(i: int, left: int, singles: int, ends: tuple[int, ...]) -> Iterator[tuple[tuple[int, ...], ...]]:
+        # left: unused vertices from i on; ends: the right ends of the arcs around i (planar)
+        while i < r and used[i]:
+            i += 1
+        if i == r:
+            yield tuple(sorted(blocks))
+            return
+        if planar:
+            ends = tuple(e for e in ends if e > i)
+        used[i] = True
+        if singles and not ends:
+            blocks.append((i,))
+            yield from rec(i + 1, left - 1, singles - 1, ends)
+            blocks.pop()
+        if left - 2 >= singles:
+            stop = min(ends, default=r) if planar else r
+            for j in range(i + 1, stop):
+                if used[j] or (planar and (j - i) % 2 == 0):
+                    continue
+                used[j] = True
+                blocks.append((i, j))
+                yield from rec(i + 1, left - 2, singles, ends + (j,) if planar else ends)
+                blocks.pop()
+                used[j] = False
+        used[i] = False
+
+    if 0 <= t <= r and (r - t) % 2 == 0:
+        yield from rec(0, r, t, ())
 
 
 def half_diagrams(level: "AlgebraLevel", counts: tuple[int, ...]) -> Iterator[HalfDiagram]:
@@ -141,13 +165,8 @@ def half_diagrams(level: "AlgebraLevel", counts: tuple[int, ...]) -> Iterator[Ha
         if t == r:
             yield tuple((v,) for v in range(r)), (0,) * r
         return
-    for blocks in partial_matchings(r):
-        marks = tuple(UNMARKED if len(b) == 2 else 0 for b in blocks)
-        if marks.count(0) != t:
-            continue
-        if kind == "temperley-lieb" and not _planar(blocks):
-            continue
-        yield blocks, marks
+    for blocks in matchings_with_singles(r, t, planar=kind == "temperley-lieb"):
+        yield blocks, tuple(UNMARKED if len(b) == 2 else 0 for b in blocks)
 
 
 def count_half_diagrams(level: "AlgebraLevel", counts: tuple[int, ...]) -> int:

@@ -83,7 +83,13 @@ class CellModule:
 
     def specht_matrix(self, perms: Perms) -> specht.Matrix:
         """σ (one permutation per colour) on the Specht basis (Kronecker product over colours)."""
-        return _kron([specht.matrix(shape, perm) for shape, perm in zip(self.label.shapes, perms)])
+        cache = self.__dict__.setdefault("_specht_matrices", {})
+        found = cache.get(perms)
+        if found is None:
+            found = _kron([specht.matrix(shape, perm) for shape, perm in zip(self.label.shapes, perms)])
+            if len(cache) < 4096:  # bounded: S_t has t! permutations
+                cache[perms] = found
+        return found
 
     # ----- the form ------------------------------------------------------------------------------
     def pair(self, h1: HalfDiagram, h2: HalfDiagram) -> tuple[int, Perms] | None:

@@ -122,25 +122,32 @@ def split(module: CellModule, gram: "GramMatrix") -> tuple[list["GramMatrix"], i
                 columns.append(coefficients + [0] * (length - len(coefficients)))
         assert len(columns) == length
         change_squared *= int(flint.fmpz_mat(columns).det()) ** 2
-    dense: list[dict[int, list[tuple[int, int]]]] = [{} for _ in range(gram.size)]
+    # B_dᵀ·G_c·B_d for every power x^c of the entries, as python-flint integer matrix products
+    by_power: dict[int, list[list[int]]] = {}
     for i, row in enumerate(gram.rows):
         for j, c, q in row:
             assert q.denominator == 1
-            dense[i].setdefault(j, []).append((c, int(q)))
+            dense = by_power.get(c)
+            if dense is None:
+                dense = by_power[c] = [[0] * gram.size for _ in range(gram.size)]
+            dense[i][j] += int(q)
+    powers = {c: flint.fmpz_mat(m) for c, m in by_power.items()}
     out = []
     for d in sorted(vectors):
         basis = vectors[d]
-        rows_d: list[list[tuple[int, int, Fraction]]] = []
-        for a in basis:
-            row: list[tuple[int, int, Fraction]] = []
-            for b_index, b in enumerate(basis):
-                terms: dict[int, int] = {}
-                for i, ca in a:
-                    entries = dense[i]
-                    for j, cb in b:
-                        for c, q in entries.get(j, ()):
-                            terms[c] = terms.get(c, 0) + ca * cb * q
-                row.extend((b_index, c, Fraction(q)) for c, q in terms.items() if q)
-            rows_d.append(row)
+        change = [[0] * len(basis) for _ in range(gram.size)]
+        for column, vector in enumerate(basis):
+            for i, value in vector:
+                change[i][column] = value
+        b_matrix = flint.fmpz_mat(change)
+        b_transposed = b_matrix.transpose()
+        rows_d: list[list[tuple[int, int, Fraction]]] = [[] for _ in basis]
+        for c in sorted(powers):
+            block = (b_transposed * powers[c] * b_matrix).tolist()
+            for a_index, values in enumerate(block):
+                row = rows_d[a_index]
+                row.extend((b_index, c, Fraction(int(v))) for b_index, v in enumerate(values) if v)
+        for row in rows_d:
+            row.sort(key=lambda entry: entry[0])
         out.append(GramMatrix(len(basis), rows_d, [Fraction(1)] * len(basis)))
     return out, change_squared

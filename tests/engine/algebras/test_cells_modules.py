@@ -9,7 +9,9 @@ from math import factorial
 
 import pytest
 
-from engine.algebras.cells.half_diagrams import count_half_diagrams, half_diagrams
+from itertools import combinations
+
+from engine.algebras.cells.half_diagrams import count_half_diagrams, half_diagrams, matchings_with_singles
 from engine.algebras.cells.labels import cell_labels, read_cell_label
 from engine.algebras.cells.gram import GramMatrix
 from engine.algebras.cells.modules import CellModule
@@ -59,6 +61,42 @@ def test_half_diagram_counts_by_hand():
     assert count_half_diagrams(level_of("brauer", 4), (2,)) == 6
     assert len(list(half_diagrams(level_of("temperley-lieb", 4), (0,)))) == 2
     assert len(list(half_diagrams(level_of("partition", 2), (1,)))) == 3
+
+
+def _brute_matchings(r, t, planar):
+    # by definition: every partial matching of r points (all pairings of every choice of singles),
+    # kept when it has t singles and, for planar ones, no two arcs cross and no arc covers a single
+    out = set()
+
+    def pairings(points):
+        if not points:
+            yield ()
+            return
+        a = points[0]
+        for i in range(1, len(points)):
+            rest = points[1:i] + points[i + 1:]
+            for p in pairings(rest):
+                yield ((a, points[i]),) + p
+
+    for singles in combinations(range(r), t):
+        others = [v for v in range(r) if v not in singles]
+        for arcs in pairings(others):
+            if planar:
+                if any(a < s < b for a, b in arcs for s in singles):
+                    continue
+                if any(a < c < b < d for a, b in arcs for c, d in arcs):
+                    continue
+            out.add(tuple(sorted([(s,) for s in singles] + list(arcs))))
+    return out
+
+
+@pytest.mark.parametrize("r", range(0, 9))
+def test_pruned_matchings_are_exactly_the_filtered_ones(r):
+    for t in range(r + 1):
+        for planar in (False, True):
+            got = list(matchings_with_singles(r, t, planar))
+            assert len(got) == len(set(got))
+            assert set(got) == _brute_matchings(r, t, planar)
 
 
 def _matrix_of(module, d, x):
