@@ -55,8 +55,9 @@ def _geometric_crossings(figure) -> int:
 def test_crossings_of_s6_to_level_4_no_more_than_the_plain_order():
     d = _diagram(S6)
     plain, better = lay_out(d, S6_TO_4, "plain"), lay_out(d, S6_TO_4, "barycentre")
-    # the plain order of S_6 to level 4 has 14 crossings; 300 random restarts of the heuristic and
-    # a simulated annealing run found none with fewer (hand computation, no proof of optimality)
+    # the plain order of S_6 to level 4 has 14 crossings, and 14 is the fewest possible: the sum over
+    # consecutive rows of each pair's own exact minimum (bench/bench_figures.py, an exhaustive
+    # search; a lower bound for any order of the whole figure) is 14
     assert (plain.crossings, better.crossings) == (14, 14)
     # the count agrees with segments crossing in the drawn figure (orientation test, common practice)
     for order in ("plain", "barycentre"):
