@@ -13,6 +13,7 @@ Presentation only: no mathematics here.
 
 from __future__ import annotations
 
+import re
 import shutil
 import sys
 from dataclasses import dataclass
@@ -238,45 +239,143 @@ class Table:
         return "\n".join(out)
 
 
-def wrap_words(line: str, width: int | None = None, indent: str = "  ") -> str:
-    """One line of prose or a list, broken only at spaces to fit ``width`` (continuations start with
-    ``indent``), so that no number or label is ever split; ends with a newline."""
-    import re
+#: a lone sign or operator is kept with the term after it: a long sum folds before "+ 3*x^2", never after "+"
+_LEADING = {"+", "-", "−", "=", "×", "·", "⊕"}
+#: inside a word too long for a line, a break may follow one of these (never between two digits)
+_BREAK_AFTER = ",})]|*·⊗;"
+_DIGITS = re.compile(r"\d+")
+#: digit runs at most this long are never shortened (a short form would not be shorter)
+_KEEP_DIGITS = 12
 
+
+def shorten_digit_runs(word: str, room: int) -> str:
+    """``word`` with its longest digit runs shortened (``1.9628e40 (41 digits)``, the space a KEEP)
+    until it fits ``room`` cells or no run is longer than 12 digits."""
+    while len(word) > room:
+        runs = [m for m in _DIGITS.finditer(word) if len(m.group()) > _KEEP_DIGITS]
+        if not runs:
+            break
+        m = max(runs, key=lambda m: len(m.group()))
+        other = len(word) - len(m.group())
+        short = short_number(int(m.group()), max(20, room - other)).replace(" ", KEEP)
+        word = word[: m.start()] + short + word[m.end():]
+    return word
+
+
+def _pieces(word: str, room: int) -> list[str]:
+    """A word longer than ``room`` cut after break characters (``,``, ``}``, ``*``, ...), never inside a
+    digit run: pieces of at most ``room`` cells where a break allows (a piece may be longer if not)."""
+    cuts = [i + 1 for i, ch in enumerate(word[:-1]) if ch in _BREAK_AFTER
+            and not (word[i - 1:i].isdigit() and word[i + 1].isdigit())]
+    pieces: list[str] = []
+    begin = 0
+    last = None
+    for cut in cuts + [len(word)]:
+        if cut - begin > room and last is not None:
+            pieces.append(word[begin:last])
+            begin = last
+        last = cut
+    pieces.append(word[begin:])
+    return [p for p in pieces if p]
+
+
+def wrap_words(line: str, width: int | None = None, indent: str = "  ", exact: bool = False) -> str:
+    """One line of prose or a list, broken only at spaces to fit ``width`` (continuations start with
+    ``indent``), so that no number or label is ever split; ends with a newline.
+
+    A lone sign (``+``, ``-``, ``=``) goes to the line of the term after it, so sums fold at term
+    boundaries.  A word longer than a whole line has its long digit runs shortened with their digit
+    counts (not with ``exact``: then a number stays whole, on a line of its own if need be), then is
+    cut after a comma, brace or product sign, never inside a number.
+    """
     width = output_width() if width is None else width
     text = line.rstrip("\n")
+    if len(text) <= width:
+        return text.replace(KEEP, " ") + "\n"
     lead = text[: len(text) - len(text.lstrip(" "))]
+    room = max(MIN_WIDTH // 2, width - len(indent))
+    words: list[tuple[str, str]] = []
+    for sep, word in re.findall(r"(\s*)(\S+)", text[len(lead):]):
+        if words and words[-1][1] in _LEADING:
+            words[-1] = (words[-1][0], words[-1][1] + sep + word)  # "+ 3*x^2" as one unit
+            continue
+        words.append((sep, word))
     lines: list[str] = []
     current = lead
-    for sep, word in re.findall(r"(\s*)(\S+)", text[len(lead):]):
-        if current.strip() and len(current) + len(sep) + len(word) > width:
-            lines.append(current)
-            current = indent + word
+    for sep, word in words:
+        if len(word) > room:
+            if not exact:
+                word = shorten_digit_runs(word, room)
+            parts = _pieces(word, room) if len(word) > room else [word]
         else:
-            current += sep + word
+            parts = [word]
+        for n, part in enumerate(parts):
+            gap = sep if n == 0 else ""
+            if current.strip() and len(current) + len(gap) + len(part) > width:
+                lines.append(current)
+                current = indent + part.lstrip(" ")
+            else:
+                current += gap + part
     lines.append(current)
-    return "\n".join(lines) + "\n"
+    return "\n".join(lines).replace(KEEP, " ") + "\n"
 
 
 class FittedOutput:
     """A stand-in for ``sys.stdout`` whose complete lines are fitted by ``wrap_words`` (broken only at
-    spaces, continuations indented): for commands that write prose and lists line by line."""
+    spaces, continuations indented, too long numbers shortened unless ``exact``): for commands that
+    write prose and lists line by line.  ``raw`` writes drawings as they are."""
 
-    def __init__(self, indent: str = "    ", stream: TextIO | None = None) -> None:
+    def __init__(self, indent: str = "    ", stream: TextIO | None = None, exact: bool = False) -> None:
         self.indent = indent
         self.stream = stream or sys.stdout
         self.width = output_width()
+        self.exact = exact
         self._pending = ""
 
     def write(self, text: str) -> int:
         self._pending += text
         while "\n" in self._pending:
             line, self._pending = self._pending.split("\n", 1)
-            self.stream.write(wrap_words(line, self.width, self.indent))
+            self.stream.write(wrap_words(line, self.width, self.indent, self.exact))
         return len(text)
+
+    def raw(self, text: str) -> None:
+        """Text written as it is (a drawing that cannot be folded)."""
+        self.flush()
+        self.stream.write(text)
+
+    def number(self, prefix: str, n: int, suffix: str = "") -> None:
+        """One line ``prefix`` ``n`` ``suffix``: see ``number_line``."""
+        self.flush()
+        self.stream.write(number_line(prefix, n, self.width, self.exact, suffix) + "\n")
 
     def flush(self) -> None:
         if self._pending:
-            self.stream.write(wrap_words(self._pending, self.width, self.indent))
+            self.stream.write(wrap_words(self._pending, self.width, self.indent, self.exact))
             self._pending = ""
         self.stream.flush()
+
+
+def number_line(prefix: str, n: int, width: int, exact: bool, suffix: str = "", note: bool = False) -> str:
+    """``prefix`` then ``n`` (then ``suffix``, folded after it where needed): all digits when they fit the
+    line or with ``exact`` (then a long number on a line of its own), else shortened with its digit
+    count.  ``note`` adds the digit count to a number shown whole."""
+    count = digits_note(n)
+    whole = f"{n} {count}" if note else str(n)
+    if len(prefix) + len(whole) <= width:
+        text = prefix + whole
+    elif exact:
+        text = prefix.rstrip() + "\n" + exact_number(n)
+    else:
+        text = prefix + short_number(n, max(20, width - len(prefix)))
+    if suffix:
+        last = text.rsplit("\n", 1)[-1]
+        joined = last + suffix
+        text = text[: len(text) - len(last)] + wrap_words(joined, width, "    ", exact).rstrip("\n")
+    return text
+
+
+def add_exact_option(parser) -> None:
+    """The ``--exact`` option of commands that print numbers that may be huge."""
+    parser.add_argument("--exact", action="store_true", help="every digit of every number (by default a "
+                        "number too wide for the screen is shortened, with its digit count)")

@@ -8,8 +8,7 @@ from typing import Any, Sequence
 
 from engine.diagram import Diagram
 from engine.levels import format_level
-from engine.numbers_in import digit_count
-from tui.cli.fit import Column, Table, digits_note, exact_number, output_width, short_number
+from tui.cli.fit import Column, Table, number_line, output_width, short_number
 
 
 def _level_text(value: int | float) -> str:
@@ -64,22 +63,11 @@ def print_levels(diagram: Diagram, upto: int, nodes: bool = True, start: int = 0
             )
 
 
-def _number_line(prefix: str, n: int, width: int, exact: bool) -> str:
-    """``prefix`` then ``n`` with its digit count: all digits with ``exact`` or when they fit the
-    line, else shortened (the number on a line of its own when it is long)."""
-    note = digits_note(n)
-    if len(prefix) + digit_count(n) + 1 + len(note) <= width:
-        return f"{prefix}{n} {note}"
-    if exact:
-        return prefix.rstrip() + "\n" + exact_number(n)
-    return prefix + short_number(n, max(20, width - len(prefix)))
-
-
 def print_node(spec: str, kind: str, doc: dict[str, Any], exact: bool = False) -> None:
     width = output_width()
     lines = [f"{spec}, level {_level_text(doc['level'])}" + (f" ({kind})" if kind else "") + f": node {doc['label']}",
-             _number_line("  multiplicity (paths from the root): ", doc["multiplicity"], width, exact),
-             _number_line("  dimension of the irreducible module: ", doc["dimension"], width, exact)]
+             number_line("  multiplicity (paths from the root): ", doc["multiplicity"], width, exact, note=True),
+             number_line("  dimension of the irreducible module: ", doc["dimension"], width, exact, note=True)]
     _out("\n".join(lines) + "\n")
     for word in ("parents", "children"):
         entries: Sequence[dict[str, Any]] = doc[word]
