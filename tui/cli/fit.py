@@ -17,9 +17,12 @@ import re
 import shutil
 import sys
 from dataclasses import dataclass
-from typing import Sequence, TextIO, Union
+from typing import TYPE_CHECKING, Sequence, TextIO, Union
 
 from engine.numbers_in import digit_count
+
+if TYPE_CHECKING:
+    from fractions import Fraction
 
 Cell = Union[int, str]
 
@@ -58,6 +61,22 @@ def short_number(n: int, width: int) -> str:
     head = str(m // 10 ** (digits - keep))
     mantissa = head[0] + ("." + head[1:] if len(head) > 1 else "")
     return f"{sign}{mantissa}{tail}{note}"
+
+
+def approximate(value: "Fraction", digits: int = 6) -> str:
+    """``value`` rounded down in magnitude to ``digits`` significant digits, ``3.14159e-5``, by
+    integer arithmetic (exact however small or large the value; no float)."""
+    if value == 0:
+        return "0"
+    sign = "-" if value < 0 else ""
+    p, q = abs(value.numerator), value.denominator
+    exponent = digit_count(p) - digit_count(q)
+    if p * 10 ** max(0, -exponent) < q * 10 ** max(0, exponent):
+        exponent -= 1  # now 10^exponent <= p/q < 10^(exponent+1)
+    shift = digits - 1 - exponent
+    head = str(p * 10 ** shift // q if shift >= 0 else p // (q * 10 ** -shift))
+    mantissa = (head[0] + "." + head[1:]).rstrip("0").rstrip(".")
+    return f"{sign}{mantissa}" + (f"e{exponent}" if exponent else "")
 
 
 def exact_number(n: int) -> str:
@@ -244,39 +263,55 @@ _LEADING = {"+", "-", "−", "=", "×", "·", "⊕"}
 #: inside a word too long for a line, a break may follow one of these (never between two digits)
 _BREAK_AFTER = ",})]|*·⊗;"
 _DIGITS = re.compile(r"\d+")
+#: a number with thousands separators, 3,230,608,073 (not in a word holding a diagram's braces)
+_GROUPED = re.compile(r"(?<![\d,])\d{1,3}(?:,\d{3})+(?![\d,])")
 #: digit runs at most this long are never shortened (a short form would not be shorter)
 _KEEP_DIGITS = 12
 
 
+def abbreviated(n: int, keep: int = 12) -> str:
+    """``n`` always shortened: ``keep`` leading digits (at most) and the digit count, ``9.91267988808e86 (87 digits)``."""
+    digits = digit_count(n)
+    head = str(abs(n) // 10 ** max(0, digits - keep))
+    mantissa = head[0] + ("." + head[1:] if len(head) > 1 else "")
+    return f"{'-' if n < 0 else ''}{mantissa}e{digits - 1} {digits_note(n)}"
+
+
 def shorten_digit_runs(word: str, room: int) -> str:
-    """``word`` with its longest digit runs shortened (``1.9628e40 (41 digits)``, the space a KEEP)
-    until it fits ``room`` cells or no run is longer than 12 digits."""
+    """``word`` with its longest numbers shortened (``1.9628e40 (41 digits)``, the space a KEEP) until it
+    fits ``room`` cells or no number is longer than 12 digits.  Numbers with thousands separators count
+    whole, except in a word holding a diagram's braces."""
     while len(word) > room:
-        runs = [m for m in _DIGITS.finditer(word) if len(m.group()) > _KEEP_DIGITS]
+        pattern = _DIGITS if "{" in word else _GROUPED
+        runs = [m for m in pattern.finditer(word) if len(m.group().replace(",", "")) > _KEEP_DIGITS]
+        if not runs and pattern is _GROUPED:
+            runs = [m for m in _DIGITS.finditer(word) if len(m.group()) > _KEEP_DIGITS]
         if not runs:
             break
         m = max(runs, key=lambda m: len(m.group()))
-        other = len(word) - len(m.group())
-        short = short_number(int(m.group()), max(20, room - other)).replace(" ", KEEP)
-        word = word[: m.start()] + short + word[m.end():]
+        word = word[: m.start()] + abbreviated(int(m.group().replace(",", ""))).replace(" ", KEEP) + word[m.end():]
     return word
 
 
-def _pieces(word: str, room: int) -> list[str]:
-    """A word longer than ``room`` cut after break characters (``,``, ``}``, ``*``, ...), never inside a
-    digit run: pieces of at most ``room`` cells where a break allows (a piece may be longer if not)."""
-    cuts = [i + 1 for i, ch in enumerate(word[:-1]) if ch in _BREAK_AFTER
-            and not (word[i - 1:i].isdigit() and word[i + 1].isdigit())]
-    pieces: list[str] = []
-    begin = 0
-    last = None
+def _cuts(word: str) -> list[int]:
+    """Where a word too long for a line may be cut: after a comma, brace, bar or product sign, never
+    between two digits of a number (a diagram's ``{1,2}`` may be cut after its comma, ``3,230,608`` not)."""
+    braces = "{" in word
+    return [i + 1 for i, ch in enumerate(word[:-1]) if ch in _BREAK_AFTER and word[i + 1] not in ",;)}]"
+            and (braces or not (word[i - 1:i].isdigit() and word[i + 1].isdigit()))]
+
+
+def _take(word: str, cuts: list[int], begin: int, room: int) -> int:
+    """The end of the longest piece ``word[begin:end]`` of at most ``room`` cells ending at a cut (or
+    the word's end); ``begin`` itself when none fits."""
+    best = begin
     for cut in cuts + [len(word)]:
-        if cut - begin > room and last is not None:
-            pieces.append(word[begin:last])
-            begin = last
-        last = cut
-    pieces.append(word[begin:])
-    return [p for p in pieces if p]
+        if cut <= begin:
+            continue
+        if cut - begin > room:
+            break
+        best = cut
+    return best
 
 
 def wrap_words(line: str, width: int | None = None, indent: str = "  ", exact: bool = False) -> str:
@@ -284,7 +319,7 @@ def wrap_words(line: str, width: int | None = None, indent: str = "  ", exact: b
     ``indent``), so that no number or label is ever split; ends with a newline.
 
     A lone sign (``+``, ``-``, ``=``) goes to the line of the term after it, so sums fold at term
-    boundaries.  A word longer than a whole line has its long digit runs shortened with their digit
+    boundaries.  A word longer than a whole line has its long numbers shortened with their digit
     counts (not with ``exact``: then a number stays whole, on a line of its own if need be), then is
     cut after a comma, brace or product sign, never inside a number.
     """
@@ -303,19 +338,30 @@ def wrap_words(line: str, width: int | None = None, indent: str = "  ", exact: b
     lines: list[str] = []
     current = lead
     for sep, word in words:
-        if len(word) > room:
-            if not exact:
-                word = shorten_digit_runs(word, room)
-            parts = _pieces(word, room) if len(word) > room else [word]
-        else:
-            parts = [word]
-        for n, part in enumerate(parts):
-            gap = sep if n == 0 else ""
-            if current.strip() and len(current) + len(gap) + len(part) > width:
+        if len(word) > room and not exact:
+            word = shorten_digit_runs(word, room)
+        if len(word) <= room or not _cuts(word):
+            if current.strip() and len(current) + len(sep) + len(word) > width:
                 lines.append(current)
-                current = indent + part.lstrip(" ")
+                current = indent + word
             else:
-                current += gap + part
+                current += sep + word
+            continue
+        cuts, begin, gap = _cuts(word), 0, sep  # too long for any line: cut it, filling each line
+        while begin < len(word):
+            end = _take(word, cuts, begin, width - len(current) - len(gap))
+            if end == begin:
+                if current.strip():
+                    lines.append(current)
+                    current, gap = indent, ""
+                    continue
+                end = _take(word, cuts, begin, 10 ** 9) if _take(word, cuts, begin, room) == begin else \
+                    _take(word, cuts, begin, room)
+            current += gap + word[begin:end]
+            gap, begin = "", end
+            if begin < len(word):
+                lines.append(current)
+                current = indent
     lines.append(current)
     return "\n".join(lines).replace(KEEP, " ") + "\n"
 
@@ -364,8 +410,9 @@ def number_line(prefix: str, n: int, width: int, exact: bool, suffix: str = "", 
     whole = f"{n} {count}" if note else str(n)
     if len(prefix) + len(whole) <= width:
         text = prefix + whole
-    elif exact:
-        text = prefix.rstrip() + "\n" + exact_number(n)
+    elif exact:  # the number on a line of its own, indented where it fits
+        alone = exact_number(n)
+        text = prefix.rstrip() + "\n" + ("    " + alone if len(alone) + 4 <= width else alone)
     else:
         text = prefix + short_number(n, max(20, width - len(prefix)))
     if suffix:

@@ -5,6 +5,7 @@ from __future__ import annotations
 import argparse
 import sys
 
+from tui.cli.fit import add_exact_option
 from tui.cli.support import DelayedProgress, level_index, print_json
 
 
@@ -20,6 +21,7 @@ def add_commands(sub: argparse._SubParsersAction) -> None:
     p.add_argument("spec", help="a tower spec with a diagram algebra, e.g. symmetric:n=3")
     p.add_argument("--level", required=True, metavar="L", help="the level (3, 2.5, 5/2, 2+1/2)")
     p.add_argument("--json", action="store_true", help="one JSON object")
+    add_exact_option(p)
     p.set_defaults(handler=run_algebra)
 
 
@@ -34,15 +36,18 @@ def run_algebra(args: argparse.Namespace) -> int:
     if args.json:
         print_json(document)
         return 0
-    out = sys.stdout
+    from tui.cli.fit import FittedOutput
+
+    out = FittedOutput(exact=args.exact)  # a number too wide is shortened with its digit count
     parameter = "none" if document["parameter"] is None else str(document["parameter"])
     out.write(f"{document['algebra']} at level {document['level']} of {tower.spec} (parameter {parameter})\n")
-    out.write(f"  basis diagrams        {document['basis']}\n")
+    out.number("  basis diagrams        ", document["basis"])
     if document["rank_method"] == "computed":
-        out.write(f"  rank of the image     {document['rank']}   computed on the tensor space "
-                  f"(equals Σm² = {document['squares']})\n")
+        out.number("  rank of the image     ", document["rank"], "   computed on the tensor space (equals Σm² = "
+                   f"{document['squares']})")
     else:
-        out.write(f"  rank of the image     {document['rank']}   from the Bratteli diagram (Σm²), not computed: "
-                  f"{document['note']}\n")
-    out.write(f"  kernel                {document['kernel']}\n")
+        out.number("  rank of the image     ", document["rank"], "   from the Bratteli diagram (Σm²), not "
+                   f"computed: {document['note']}")
+    out.number("  kernel                ", document["kernel"])
+    out.flush()
     return 0

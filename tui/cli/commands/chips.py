@@ -32,7 +32,9 @@ def run(args: argparse.Namespace) -> int:
     if args.json:
         print_json(document)
         return 0
-    out = sys.stdout
+    from tui.cli.fit import FittedOutput
+
+    out = FittedOutput()  # lines fitted to the width, broken only at spaces (never inside a number)
 
     def shown(config: list[int]) -> str:
         return ", ".join(f"{label}={c}" for label, c in zip(document["nodes"], config) if c) or "empty"
@@ -48,4 +50,5 @@ def run(args: argparse.Namespace) -> int:
         out.write(f"{len(every)} recurrent configurations {check}\n")
         for config in every:
             out.write(f"  {shown(config)}\n")
+    out.flush()
     return 0

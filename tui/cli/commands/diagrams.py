@@ -5,6 +5,7 @@ from __future__ import annotations
 import argparse
 import sys
 
+from tui.cli.fit import add_exact_option
 from tui.cli.support import level_index, print_json
 
 _ORDER = ("Ranks follow the order documented in engine/algebras/bases.py (restricted growth strings for "
@@ -25,6 +26,7 @@ def add_commands(sub: argparse._SubParsersAction) -> None:
     p.add_argument("--draw", action="store_true", help="draw each diagram with box characters")
     p.add_argument("--tikz", action="store_true", help="print each diagram as a TikZ picture")
     p.add_argument("--json", action="store_true", help="one JSON object")
+    add_exact_option(p)
     p.set_defaults(handler=run_diagrams)
 
 
@@ -44,14 +46,18 @@ def run_diagrams(args: argparse.Namespace) -> int:
     if args.json:
         print_json(document)
         return 0
-    out = sys.stdout
+    from tui.cli.fit import output_width, wrap_words
+
+    out = sys.stdout  # lines fitted to the width: broken at spaces and between blocks, never in a number
+    fit = output_width()
     shown = document["diagrams"]
     listed = f"ranks {start}..{start + len(shown) - 1}" if shown else "none listed (--count 0)"
-    out.write(f"{document['algebra']} at level {document['level']} of {tower.spec}: "
-              f"{document['total']} diagrams; {listed}\n")
+    out.write(wrap_words(f"{document['algebra']} at level {document['level']} of {tower.spec}: "
+                         f"{document['total']} diagrams; {listed}", fit, "    ", args.exact))
     width = len(str(start + len(shown) - 1)) if shown else 1
     for entry in shown:
-        out.write(f"{entry['rank']:>{width}}  {entry['diagram']}\n")
+        out.write(wrap_words(f"{entry['rank']:>{width}}  {entry['diagram']}", fit, " " * min(width + 2, 12),
+                             args.exact))
         if args.draw or args.tikz:
             d = parse_diagram(entry["diagram"], level.vertices)
             lines = draw(d, level.vertices) if args.draw else []

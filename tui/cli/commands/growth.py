@@ -31,9 +31,12 @@ def run(args: argparse.Namespace) -> int:
     if args.json:
         print_json(document)
         return 0
-    out = sys.stdout
+    from tui.cli.fit import FittedOutput
+
+    out = FittedOutput()  # lines fitted to the width, broken only at spaces (never inside a number)
     out.write(f"{document['label']} on {tower.spec}: {document['text']}   (|G| = Σd² = {document['order']}, "
               f"d = {document['dimension']}, period {document['period']})\n")
     for r in document["ratios"]:
         out.write(f"  k = {r['k']}: m(k) / leading term ≈ {r['approximately']}\n")
+    out.flush()
     return 0

@@ -29,25 +29,30 @@ def run(args: argparse.Namespace) -> int:
     from engine.series.rational import polynomial_text
     from engine.specs import parse_spec
 
+    from tui.cli.fit import FittedOutput
+
     tower = parse_spec(args.spec)
+    out = FittedOutput()  # long polynomials fold before a sign, never inside a number
     if args.all:
         document = all_series_document(tower)
         if args.json:
             print_json(document)
             return 0
         for s in document["series"]:
-            _line(s, polynomial_text)
+            _line(out, s, polynomial_text)
+        out.flush()
         return 0
     document = series_document(tower, args.label)
     if args.json:
         print_json({k: document[k] for k in ("label", "numerator", "denominator")})
         return 0
-    _line(document, polynomial_text)
+    _line(out, document, polynomial_text)
     if "closed_form" in document:
-        sys.stdout.write(f"  m(k) = {document['closed_form']}   (0^k is 1 at k = 0, else 0)\n")
+        out.write(f"  m(k) = {document['closed_form']}   (0^k is 1 at k\u00a0=\u00a00, else\u00a00)\n")
+    out.flush()
     return 0
 
 
-def _line(s: dict, text) -> None:
+def _line(out, s: dict, text) -> None:
     n, d = text(tuple(s["numerator"])), text(tuple(s["denominator"]))
-    sys.stdout.write(f"{s['label']}: Σ m({s['levels']}) t^k = ({n}) / ({d})\n")
+    out.write(f"{s['label']}: Σ m({s['levels']}) t^k = ({n}) / ({d})\n")

@@ -20,6 +20,8 @@ def add_commands(sub: argparse._SubParsersAction) -> None:
     p.add_argument("--lazy", action="store_true", help="the lazy walk ½(I + P)")
     p.add_argument("--epsilon", default="1/4", metavar="ε", help="the mixing time's distance (default 1/4)")
     p.add_argument("--json", action="store_true", help="one JSON object, rationals as strings \"p/q\"")
+    p.add_argument("--exact", action="store_true", help="every distance as an exact fraction (by default a "
+                   "fraction too long for its column is shown to 6 digits, with its length)")
     p.set_defaults(handler=run)
 
 
@@ -33,14 +35,16 @@ def run(args: argparse.Namespace) -> int:
     if args.json:
         print_json(document)
         return 0
-    out = sys.stdout
+    from tui.cli.fit import Column, FittedOutput, Table
+
+    out = FittedOutput(exact=args.exact)  # lines fitted to the width, broken only at spaces
     kind = "lazy walk ½(I + P)" if args.lazy else "walk"
     out.write(f"{kind} on {tower.spec}: {len(document['nodes'])} nodes, P(i→j) = M_ij·d_j/(d_i·{document['step_constant']})\n")
     law = "the Plancherel measure d_i²/|G| (every node reached: V is faithful)" if document["plancherel"] else \
         f"on the {document['reached']} nodes reached from the root"
     out.write(f"stationary law: {law}\n")
     for label, p in zip(document["nodes"], document["stationary"]):
-        out.write(f"  {label}: {p}\n")
+        out.write(f"  {label}: {_short(p, args.exact)}\n")
     if document["period"] > 1:
         out.write(f"periodic with period {document['period']}: the distance does not tend to 0 (try --lazy)\n")
     if "eigenvalues" in document:
@@ -50,18 +54,27 @@ def run(args: argparse.Namespace) -> int:
         shown = " · ".join(f"({f['factor']})" + (f"^{f['multiplicity']}" if f["multiplicity"] > 1 else "")
                            for f in document["characteristic_factors"])
         out.write(f"eigenvalues: the roots of {shown}, divided by {document['step_constant']}\n")
-    out.write("k  total variation  separation\n")
+    table = Table([Column("k", "right", key=True), Column("total variation"), Column("separation")])
     for k, (d, s) in enumerate(zip(document["distance"], document["separation"])):
-        out.write(f"{k}  {_short(d)}  {_short(s)}\n")
+        table.add_row(k, _short(d, args.exact), _short(s, args.exact))
+    out.raw(table.render(out.width))
     t = document["mixing_time"]
     out.write(f"mixing time to {document['epsilon']}: " + (f"{t}\n" if t is not None else f"not within {args.steps} steps\n"))
+    out.flush()
     return 0
 
 
-def _short(text: str) -> str:
-    if len(text) <= 40:
+#: the longest fraction shown whole in the text (two such columns beside k fit 80 columns)
+SHORT_FRACTION = 34
+
+
+def _short(text: str, exact: bool = False) -> str:
+    """A fraction ``p/q`` as it is, or when longer than ``SHORT_FRACTION`` its value to 6 significant
+    digits computed exactly from p and q (never through a float), with the length of the exact text."""
+    if exact or len(text) <= SHORT_FRACTION:
         return text
     from fractions import Fraction
 
-    value = Fraction(text)
-    return f"≈ {float(value):.6g} ({len(text)} characters exact; --json)"
+    from tui.cli.fit import approximate
+
+    return f"≈ {approximate(Fraction(text))} ({len(text)} characters)"
