@@ -47,6 +47,7 @@ def series_document(tower, label: str) -> dict[str, Any]:
     closed = closed_form_text(tower, view, found.label, half)
     if closed:
         document["closed_form"] = closed
+        document["closed_form_of"] = "m(k+1/2)" if half else "m(k)"
     return document
 
 
@@ -60,11 +61,16 @@ def all_series_document(tower) -> dict[str, Any]:
 
 
 def closed_form_text(tower, view: FiniteView, label: str, half: bool) -> str | None:
-    """m(k) as a sum over the character values of V, where the tower has a character table."""
+    """m(k) as a sum over the character values of V (a character table, no half levels), else over
+    the rational eigenvalues of the whole step (``engine.series.power_sums``; m(k+1/2) at half
+    levels); None where they are not rational."""
     from engine.capabilities import CharacterData
 
     if half or view.period != 1 or tower.capability(CharacterData) is None:
-        return None
+        from engine.series.power_sums import node_power_sum
+
+        found = node_power_sum(view, half, label)
+        return found.text() if found is not None else None
     from engine.series.eigen_sums import eigen_sum
 
     return eigen_sum(tower, label, view.period).text()
