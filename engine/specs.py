@@ -2,13 +2,14 @@
 
 Families register themselves: every module in ``engine/families/`` that defines ``FAMILY``
 (a ``Family``) is a family.  Adding a family is adding a module; nothing here changes.
+The module of family ``general-linear`` is ``engine/families/general_linear.py``: a spec imports
+only its family's module (a quick start); listings discover them all.
 A comma inside parentheses belongs to the value (``module=(5,1)``).
 """
 
 from __future__ import annotations
 
-import importlib
-import pkgutil
+import sys
 from dataclasses import dataclass
 from typing import Callable
 
@@ -38,20 +39,57 @@ class Family:
 
 
 _REGISTRY: dict[str, Family] | None = None
+#: families imported one at a time by name (``family``)
+_LOADED: dict[str, Family] = {}
+
+
+def module_name(name: str) -> str | None:
+    """The module a family of that name lives in (``general-linear`` → ``general_linear``), or None
+    for a name no module can carry."""
+    module = name.replace("-", "_")
+    if not module.isidentifier() or not module.isascii() or module.startswith("_") or not module.islower():
+        return None
+    return module
+
+
+def _import_family(module: str) -> Family | None:
+    path = f"engine.families.{module}"
+    try:
+        __import__(path)  # the import statement's machinery: ``python -X importtime`` sees it
+    except ModuleNotFoundError as exc:
+        if exc.name == path:
+            return None
+        raise
+    family = getattr(sys.modules[path], "FAMILY", None)
+    return family if isinstance(family, Family) else None
+
+
+def family(name: str) -> Family | None:
+    """The family called ``name``, importing only its module (every module when it is not found
+    there: then the whole registry decides), or None."""
+    if name in _LOADED:
+        return _LOADED[name]
+    module = module_name(name)
+    found = _import_family(module) if module is not None else None
+    if found is not None and found.name == name:
+        _LOADED[name] = found
+        return found
+    return families().get(name)
 
 
 def families() -> dict[str, Family]:
     """name → Family, discovered from engine/families/, in listing order."""
     global _REGISTRY
     if _REGISTRY is None:
+        import pkgutil
+
         import engine.families as package
 
         found: list[Family] = []
         for info in pkgutil.iter_modules(package.__path__):
-            module = importlib.import_module(f"engine.families.{info.name}")
-            family = getattr(module, "FAMILY", None)
-            if isinstance(family, Family):
-                found.append(family)
+            one = _import_family(info.name)
+            if one is not None:
+                found.append(one)
         found.sort(key=lambda f: (f.rank, f.name))
         _REGISTRY = {f.name: f for f in found}
     return _REGISTRY
@@ -89,19 +127,18 @@ def split_spec(spec: str) -> tuple[str, dict[str, str]]:
 def parse_spec(spec: str) -> Tower:
     """Build the tower a spec names; SpecError with a one-line message otherwise."""
     name, params = split_spec(spec)
-    registry = families()
-    family = registry.get(name)
-    if family is None:
-        raise SpecError(f"unknown tower family {quote(name)} (known: {', '.join(registry)})")
+    chosen = family(name)
+    if chosen is None:
+        raise SpecError(f"unknown tower family {quote(name)} (known: {', '.join(families())})")
     for key in params:
-        if key not in family.keys:
-            accepted = ", ".join(family.keys) or "none"
-            raise SpecError(f"{family.name}: unknown key {quote(key)} (accepted keys: {accepted})")
-    for key in family.required:
+        if key not in chosen.keys:
+            accepted = ", ".join(chosen.keys) or "none"
+            raise SpecError(f"{chosen.name}: unknown key {quote(key)} (accepted keys: {accepted})")
+    for key in chosen.required:
         if key not in params:
-            raise SpecError(f"{family.name}: key {quote(key)} is required ({family.keys[key]})")
-    canonical = family.name + (":" + ",".join(f"{k}={v}" for k, v in params.items()) if params else "")
-    return family.build(canonical, params)
+            raise SpecError(f"{chosen.name}: key {quote(key)} is required ({chosen.keys[key]})")
+    canonical = chosen.name + (":" + ",".join(f"{k}={v}" for k, v in params.items()) if params else "")
+    return chosen.build(canonical, params)
 
 
 #: digits of a whole-number spec key (n=, m=, ...): no family is usable beyond this

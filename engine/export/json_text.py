@@ -9,7 +9,7 @@ text is byte for byte what ``json.dumps`` would write."""
 from __future__ import annotations
 
 import json
-import secrets
+import os
 from typing import Any
 
 #: ints with at least this many bits are written by flint
@@ -19,7 +19,7 @@ _BIG_BITS = 3000
 def dumps(value: Any, indent: int | None = None) -> str:
     """``json.dumps(value, ensure_ascii=False, indent=indent)`` with large ints written by flint."""
     found: list[int] = []
-    token = secrets.token_hex(8)
+    token = os.urandom(8).hex()  # not secrets.token_hex: secrets loads hashlib and OpenSSL
 
     def swap(x: Any) -> Any:
         if type(x) is int:

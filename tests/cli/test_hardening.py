@@ -215,7 +215,7 @@ def test_memory_and_recursion_errors_are_one_line(capsys, monkeypatch):
             raise error()
 
         args = parser.parse_args(["levels", "symmetric:n=3", "--to", "2"])
-        monkeypatch.setattr(cli_main, "build_parser", lambda args=args, boom=boom: _Fixed(args, boom))
+        monkeypatch.setattr(cli_main, "build_parser", lambda *_, args=args, boom=boom: _Fixed(args, boom))
         one_line_refusal(capsys, "levels", "symmetric:n=3", "--to", "2")
     assert levels_command  # the real command module is importable
 

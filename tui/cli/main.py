@@ -17,14 +17,35 @@ EXIT_USAGE = 2
 
 
 class _Parser(argparse.ArgumentParser):
-    """argparse with a one-line error (the contract wants one line on stderr, exit 2)."""
+    """argparse with a one-line error (the contract wants one line on stderr, exit 2), and help
+    fitted to the terminal without importing shutil (argparse's default does, at every argument)."""
 
     def error(self, message: str) -> None:  # type: ignore[override]
         self.exit(EXIT_USAGE, f"{self.prog}: error: {message} (see {self.prog} --help)\n")
 
+    def _get_formatter(self) -> argparse.HelpFormatter:
+        return self.formatter_class(prog=self.prog, width=_columns() - 2)
 
-def build_parser() -> argparse.ArgumentParser:
-    from tui.cli.commands import COMMAND_MODULES
+
+def _columns() -> int:
+    """The terminal's width as ``shutil.get_terminal_size`` finds it: $COLUMNS, the terminal, or 80."""
+    try:
+        columns = int(os.environ.get("COLUMNS", "0"))
+    except ValueError:
+        columns = 0
+    if columns <= 0:
+        try:
+            columns = os.get_terminal_size(sys.__stdout__.fileno()).columns  # type: ignore[union-attr]
+        except (AttributeError, ValueError, OSError):
+            columns = 0
+    return columns if columns > 0 else 80
+
+
+def build_parser(command: str | None = None) -> argparse.ArgumentParser:
+    """The whole parser; with ``command``, only the command module named like it (a quick start:
+    a lookup neither imports nor sets up the other commands).  The whole parser when no module is
+    named like it or the module does not register it."""
+    from tui.cli import commands
 
     parser = _Parser(
         prog="towerscope",
@@ -34,7 +55,13 @@ def build_parser() -> argparse.ArgumentParser:
         "syntax and the exit statuses (2 for bad input) stay fixed for scripts; README, 'For scripts'.",
     )
     sub = parser.add_subparsers(dest="command", metavar="COMMAND", parser_class=_Parser)
-    for module in COMMAND_MODULES:
+    name = commands.module_for(command) if command else None
+    if name is not None:
+        commands.load(name).add_commands(sub)
+        if command in sub.choices:
+            return parser
+        return build_parser()
+    for module in commands.command_modules():
         module.add_commands(sub)
     return parser
 
@@ -42,7 +69,8 @@ def build_parser() -> argparse.ArgumentParser:
 def main(argv: Sequence[str] | None = None) -> int:
     sys.set_int_max_str_digits(0)  # deep levels have multiplicities with far more than 4,300 digits
     args_list = list(sys.argv[1:] if argv is None else argv)
-    parser = build_parser()
+    quick = args_list[0] if args_list and not args_list[0].startswith("-") else None
+    parser = build_parser(quick)
     args = parser.parse_args(args_list)
     if args.command is None:
         args_list = ["open"]

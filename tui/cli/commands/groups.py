@@ -9,8 +9,6 @@ the caller prints its message and exits 2.  Neither sympy nor rich is imported a
 from __future__ import annotations
 
 import argparse
-import csv
-import json
 import sys
 from typing import Any
 
@@ -31,6 +29,9 @@ def add_commands(subparsers: argparse._SubParsersAction) -> None:
 
 # ----- mckay ------------------------------------------------------------------------------------
 def run_mckay(args: argparse.Namespace) -> int:
+    import csv
+    import json
+
     from engine.export.group_documents import mckay_document
     from engine.specs import parse_spec
 
@@ -67,6 +68,8 @@ def _print_matrix(step: dict[str, Any], title: str) -> None:
 
 # ----- check ------------------------------------------------------------------------------------
 def run_check(args: argparse.Namespace) -> int:
+    import json
+
     from engine.export.group_documents import check_report
 
     report = check_report(args.file)
