@@ -288,8 +288,9 @@ def shorten_digit_runs(word: str, room: int) -> str:
             runs = [m for m in _DIGITS.finditer(word) if len(m.group()) > _KEEP_DIGITS]
         if not runs:
             break
-        m = max(runs, key=lambda m: len(m.group()))
-        word = word[: m.start()] + abbreviated(int(m.group().replace(",", ""))).replace(" ", KEEP) + word[m.end():]
+        longest = max(len(m.group()) for m in runs)  # every number of that length (the two ends of a..b alike)
+        for m in reversed([m for m in runs if len(m.group()) == longest]):
+            word = word[: m.start()] + abbreviated(int(m.group().replace(",", ""))).replace(" ", KEEP) + word[m.end():]
     return word
 
 
@@ -330,7 +331,7 @@ def wrap_words(line: str, width: int | None = None, indent: str = "  ", exact: b
     lead = text[: len(text) - len(text.lstrip(" "))]
     room = max(MIN_WIDTH // 2, width - len(indent))
     words: list[tuple[str, str]] = []
-    for sep, word in re.findall(r"(\s*)(\S+)", text[len(lead):]):
+    for sep, word in re.findall(r"( *)([^ ]+)", text[len(lead):]):  # spaces only: KEEP joins
         if words and words[-1][1] in _LEADING:
             words[-1] = (words[-1][0], words[-1][1] + sep + word)  # "+ 3*x^2" as one unit
             continue
@@ -420,6 +421,11 @@ def number_line(prefix: str, n: int, width: int, exact: bool, suffix: str = "", 
         joined = last + suffix
         text = text[: len(text) - len(last)] + wrap_words(joined, width, "    ", exact).rstrip("\n")
     return text
+
+
+def rank_range(start: int, last: int) -> str:
+    """``3..7``; two long ranks as ``A to B``, so that each may stand whole on its own line."""
+    return f"{start}..{last}" if len(str(start)) + len(str(last)) <= 40 else f"{start} to {last}"
 
 
 def add_exact_option(parser) -> None:

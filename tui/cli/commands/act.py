@@ -53,7 +53,16 @@ def run_act(args: argparse.Namespace) -> int:
     matrix = document["matrix"]
     out.write(f"{document['algebra']} on a space of dimension {document['space']} "
               "(rows: top labels, columns: bottom labels)\n")
+    from tui.cli.fit import Column, Table, output_width
+
     width = max((len(str(v)) for row in matrix for v in row), default=1)
-    for row in matrix:
-        out.write(" ".join(f"{v:>{width}}" if v else " " * (width - 1) + "." for v in row) + "\n")
+    if len(matrix) * (width + 1) - 1 <= output_width():
+        for row in matrix:
+            out.write(" ".join(f"{v:>{width}}" if v else " " * (width - 1) + "." for v in row) + "\n")
+        return 0
+    # too wide for the screen: numbered rows and columns, in parts that repeat the row number
+    table = Table([Column("row", "right", key=True)] + [Column(str(j), "right") for j in range(1, len(matrix) + 1)])
+    for i, row in enumerate(matrix, 1):
+        table.add_row(i, *[v if v else "." for v in row])
+    out.write(table.render(output_width()))
     return 0

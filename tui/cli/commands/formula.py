@@ -5,6 +5,7 @@ from __future__ import annotations
 import argparse
 import sys
 
+from tui.cli.fit import add_exact_option
 from tui.cli.support import print_json
 
 
@@ -19,6 +20,7 @@ def add_commands(sub: argparse._SubParsersAction) -> None:
     p.add_argument("--label", required=True, metavar="X", help="a partition of N, or of N−1 for half levels")
     p.add_argument("--check", type=int, default=8, metavar="K", help="also print the values at k = 0..K (default 8)")
     p.add_argument("--json", action="store_true", help="one JSON object (coefficients as exact fractions)")
+    add_exact_option(p)
     p.set_defaults(handler=run)
 
 
@@ -38,11 +40,11 @@ def run(args: argparse.Namespace) -> int:
     values = document["values"]
     from tui.cli.fit import FittedOutput
 
-    out = FittedOutput()  # lines fitted to the width, broken only at spaces (never inside a number)
+    out = FittedOutput(exact=args.exact)  # lines fitted to the width, broken only at spaces (never inside a number)
 
     out.write(f"{form.name()} on {tower.spec}, for every k ≥ 0 (S = Stirling numbers of the second kind):\n")
     out.write(f"  = {form.stirling_text()}\n")
-    out.write(f"  = {form.powers_text()}" + ("   (0^k is 1 at k = 0, else 0)" if 0 in form.powers else "") + "\n")
+    out.write(f"  = {form.powers_text()}" + ("   (0^k is 1 at k\u00a0=\u00a00, else\u00a00)" if 0 in form.powers else "") + "\n")
     where = "k+1/2" if form.half else "k"
-    out.write(f"  at {where} = " + ", ".join(f"{k}{'.5' if form.half else ''}: {v}" for k, v in enumerate(values)) + "\n")
+    out.write(f"  at {where} = " + ", ".join(f"{k}{'.5' if form.half else ''}:\u00a0{v}" for k, v in enumerate(values)) + "\n")
     return 0

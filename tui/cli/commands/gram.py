@@ -6,6 +6,7 @@ from __future__ import annotations
 import argparse
 import sys
 
+from tui.cli.fit import add_exact_option
 from tui.cli.support import level_index, open_diagram, print_json
 
 
@@ -24,6 +25,7 @@ def add_commands(sub: argparse._SubParsersAction) -> None:
     p.add_argument("--label", required=True, metavar="LAMBDA", help="the cell label, e.g. (2)")
     p.add_argument("--matrix", action="store_true", help="also print the Gram matrix")
     p.add_argument("--json", action="store_true", help="one JSON object (see the CLI contract)")
+    add_exact_option(p)
     p.set_defaults(handler=run)
 
 
@@ -42,6 +44,8 @@ def run(args: argparse.Namespace) -> int:
     if args.json:
         print_json(document)
         return 0
+    from tui.cli.fit import KEEP, output_width, wrap_words
+
     blocks = "block" if answer.through == 1 else "blocks"
     lines = [f"cell module {answer.label.text} of {level.name}: {answer.through} propagating {blocks}, "
              f"dimension {answer.dimension}"]
@@ -51,7 +55,7 @@ def run(args: argparse.Namespace) -> int:
         lines.append(f"rank of the Gram matrix at x = {level.parameter}: {answer.rank}")
     lines.append(f"Gram determinant: {polynomial_text(answer.determinant)}")
     if answer.roots:
-        lines.append(f"  vanishes at x = {roots_text(answer.roots)}")
+        lines.append(f"  vanishes at x = {roots_text(answer.roots)}".replace(" (", KEEP + "("))  # "2 (twice)" whole
     for factor, m in answer.others:
         lines.append(f"  and at the roots of {polynomial_text(factor)}" + ("" if m == 1 else f" (power {m})"))
     if any(len(s) > 1 and s[0] > 1 for s in answer.label.shapes):
@@ -70,8 +74,7 @@ def run(args: argparse.Namespace) -> int:
 
         lines.append("Gram matrix (rows and columns: half diagrams, then tableaux, in basis order):")
         for row in gram_matrix_rows(answer):
-            lines.append("  " + "  ".join(f"[{polynomial_text(entry)}]" for entry in row))
-    from tui.cli.fit import wrap_words
-
-    sys.stdout.write("".join(wrap_words(line) for line in lines))  # broken only at spaces
+            lines.append("  " + "  ".join(f"[{polynomial_text(entry)}]".replace(" ", KEEP) for entry in row))
+    width = output_width()
+    sys.stdout.write("".join(wrap_words(line, width, "  ", args.exact) for line in lines))  # broken only at spaces
     return 0

@@ -5,6 +5,7 @@ from __future__ import annotations
 import argparse
 import sys
 
+from tui.cli.fit import add_exact_option
 from tui.cli.support import DelayedProgress, level_index, print_json
 
 
@@ -24,6 +25,7 @@ def add_commands(sub: argparse._SubParsersAction) -> None:
     p.add_argument("--basis", choices=("diagram", "orbit"), default="diagram",
                    help="write the kernel elements in this basis (orbit: partition algebras, the x_π with more than N blocks)")
     p.add_argument("--json", action="store_true", help="one JSON object")
+    add_exact_option(p)
     p.set_defaults(handler=run_kernel)
 
 
@@ -55,7 +57,7 @@ def run_kernel(args: argparse.Namespace) -> int:
 
     from tui.cli.fit import FittedOutput
 
-    out = FittedOutput()  # lines fitted to the width, broken only at spaces (never inside a number)
+    out = FittedOutput(exact=args.exact)  # lines fitted to the width, broken only at spaces (never inside a number)
     shown = document["elements"]
     out.write(f"kernel of {document['algebra']} on the tensor space ({tower.spec}, level {document['level']}): "
               f"dimension {document['dimension']}")

@@ -5,6 +5,7 @@ from __future__ import annotations
 import argparse
 import sys
 
+from tui.cli.fit import add_exact_option
 from tui.cli.support import level_index, print_json
 
 
@@ -26,6 +27,7 @@ def add_commands(sub: argparse._SubParsersAction) -> None:
                    help="read the factors and write the product in this basis (orbit: partition algebras)")
     p.add_argument("--draw", action="store_true", help="draw each diagram of the product")
     p.add_argument("--json", action="store_true", help="one JSON object")
+    add_exact_option(p)
     p.set_defaults(handler=run_multiply)
 
 
@@ -42,12 +44,15 @@ def run_multiply(args: argparse.Namespace) -> int:
         return 0
     level = algebra_at(tower, index)
     result = product(level, args.first, args.second, args.symbolic, args.basis)
-    out = sys.stdout
+    from tui.cli.fit import FittedOutput
+
+    out = FittedOutput(exact=args.exact)  # folded before a sign or between blocks, never inside a number
     where = "x (symbolic)" if args.symbolic else ("none" if level.parameter is None else str(level.parameter))
     basis = ", orbit basis" if args.basis == "orbit" else ""
     out.write(f"{level.name} (parameter {where}{basis}): {len(result)} term{'s' if len(result) != 1 else ''}\n")
     out.write(format_element(result, level) + "\n")
     if args.draw:
         for d, _ in ordered(result, level):
-            out.write("\n" + "\n".join(draw(d, level.vertices)) + "\n")
+            out.raw("\n" + "\n".join(draw(d, level.vertices)) + "\n")
+    out.flush()
     return 0

@@ -35,6 +35,8 @@ def add_commands(sub: argparse._SubParsersAction) -> None:
     p.add_argument("--start", default="0", metavar="R", help="the first rank (42, 10^12, 3*10^12, 1e12; -1 is the last)")
     p.add_argument("--count", type=int, default=20, metavar="C", help="how many paths (default 20)")
     p.add_argument("--draw", action="store_true", help="draw each path's encoding (tableaux with box characters)")
+    p.add_argument("--exact", action="store_true", help="every digit of every rank and count (by default a "
+                   "number too wide for the screen is shortened, with its digit count)")
     p.set_defaults(handler=run_paths)
 
     r = sub.add_parser(
@@ -79,15 +81,19 @@ def run_paths(args: argparse.Namespace) -> int:
     tower = paths.diagram.tower
     shown = document["paths"]
     last = start + len(shown) - 1
-    from tui.cli.fit import wrap_words
+    from tui.cli.fit import output_width, wrap_words
 
     out = sys.stdout
-    listed = f"ranks {start}..{last} as {encoding.title} ({encoding.name})" if shown else "none listed (--count 0)"
-    out.write(wrap_words(f"{total} paths to {tower.format(node)} at level {document['level']} of {tower.spec}; {listed}"))
+    fit = output_width()
+    from tui.cli.fit import rank_range
+
+    listed = f"ranks {rank_range(start, last)} as {encoding.title} ({encoding.name})" if shown else "none listed (--count 0)"
+    out.write(wrap_words(f"{total} paths to {tower.format(node)} at level {document['level']} of {tower.spec}; {listed}",
+                         fit, "  ", args.exact))
     width = len(str(last))
     for rank, path in zip(range(start, last + 1), paths.iterate(index, node, start)):
         text = encoding.path_text(tower, path)
-        out.write(wrap_words(f"{rank:>{width}}  {text}", indent=" " * (width + 2)))
+        out.write(wrap_words(f"{rank:>{width}}  {text}", fit, " " * min(width + 2, 12), args.exact))
         if args.draw:
             for line in encoding.draw(tower, encoding.encode(tower, path)):
                 if line != text:

@@ -54,25 +54,23 @@ def run(args: argparse.Namespace) -> int:
     else:
         lines.append(f"at x = {x}: {'semisimple' if report.semisimple_at_parameter else 'not semisimple'}")
     lines.append(f"labels: {report.note}")
+    from tui.cli.fit import Column, Table, output_width, wrap_words
+
     rank_title = "rank" if x is None else f"rank at {x}"
-    table = [("cell", "dimension", rank_title, "node", "multiplicity", "agree")]
+    table = Table([Column("cell", key=True), Column("dimension", "right"), Column(rank_title, "right"),
+                   Column("node"), Column("multiplicity", "right"), Column("agree")])
     for row in document["cells"]:
-        table.append((row["label"], str(row["dimension"]), str(row["rank"]), row["node"] or "-",
-                      str(row["multiplicity"]) if row["node"] else "-", row["agree"]))
+        table.add_row(row["label"], row["dimension"], row["rank"], row["node"] or "-",
+                      row["multiplicity"] if row["node"] else "-", row["agree"])
     for node in document["unmatched_nodes"]:
-        table.append(("-", "-", "-", node["label"], str(node["multiplicity"]), "no cell"))
-    widths = [max(len(r[c]) for r in table) for c in range(6)]
-    for n, row in enumerate(table):
-        lines.append("  ".join(cell.ljust(widths[c]) if c in (0, 3, 5) else cell.rjust(widths[c])
-                               for c, cell in enumerate(row)).rstrip())
-        if n == 0:
-            lines.append("  ".join("-" * w for w in widths))
+        table.add_row("-", "-", "-", node["label"], node["multiplicity"], "no cell")
+    width = output_width()
+    head = "".join(wrap_words(line, width) for line in lines)  # broken only at spaces
+    lines = []
     killed = [row["label"] for row in document["cells"] if row["agree"] == "not a node" and row["rank"]]
     if killed:
         lines.append(f"cells with a simple module that V^⊗k does not see (no node here): {', '.join(killed)}")
     lines.append("the ranks agree with the tower's multiplicities on every node" if report.agree
                  else "the ranks DISAGREE with the tower somewhere (see the rows marked no)")
-    from tui.cli.fit import wrap_words
-
-    sys.stdout.write("".join(wrap_words(line) for line in lines))  # broken only at spaces
+    sys.stdout.write(head + table.render(width) + "".join(wrap_words(line, width) for line in lines))
     return 0

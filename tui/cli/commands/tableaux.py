@@ -6,6 +6,7 @@ from __future__ import annotations
 import argparse
 import sys
 
+from tui.cli.fit import add_exact_option
 from tui.cli.support import level_index, node_at, print_json
 
 
@@ -24,6 +25,7 @@ def add_commands(sub: argparse._SubParsersAction) -> None:
     p.add_argument("--start", default="0", metavar="R", help="the first rank (42, 10^12; -1 is the last)")
     p.add_argument("--count", type=int, default=20, metavar="C", help="how many (default 20)")
     p.add_argument("--json", action="store_true", help="one JSON object")
+    add_exact_option(p)
     p.set_defaults(handler=run)
 
 
@@ -54,10 +56,21 @@ def run(args: argparse.Namespace) -> int:
     if args.json:
         print_json(tableaux_document(tower, index, node, total, start, items))
         return 0
-    sys.stdout.write(f"{total} set-partition tableaux of {tower.format(node)} at level {args.level} of {tower.spec}\n")
+    from engine.encodings.drawing import draw_grid
+    from tui.cli.fit import KEEP, FittedOutput
+
+    out = FittedOutput(exact=args.exact)  # lines fitted to the width, never broken inside a number
+    out.write(f"{total} set-partition tableaux of {tower.format(node)} at level {args.level} of {tower.spec}\n")
     for r, t in items:
-        blocks = " | ".join(",".join(map(str, b)) for b in t.blocks) or "no blocks"
-        sys.stdout.write(f"{r}  blocks {blocks}\n")
-        for line in t.draw():
-            sys.stdout.write("   " + line + "\n")
+        lines = t.draw()
+        named = max(map(len, lines), default=0) + 3 > out.width  # too wide: boxes hold block numbers b1, b2, ...
+        if named:
+            lines = draw_grid([["·" if j == 0 else f"b{j}" for j in row] for row in t.cells])
+            lines += [line for line in t.draw() if line.startswith("set aside")]
+        blocks = " | ".join((f"b{j}{KEEP}=" + KEEP if named else "") + ",".join(map(str, b))
+                            for j, b in enumerate(t.blocks, 1)) or "no blocks"
+        out.write(f"{r}  blocks {blocks}\n")
+        for line in lines:
+            out.write("   " + line + "\n")
+    out.flush()
     return 0
