@@ -51,7 +51,9 @@ def run_diagrams(args: argparse.Namespace) -> int:
     out = sys.stdout  # lines fitted to the width: broken at spaces and between blocks, never in a number
     fit = output_width()
     shown = document["diagrams"]
-    listed = f"ranks {start}..{start + len(shown) - 1}" if shown else "none listed (--count 0)"
+    from tui.cli.fit import rank_range
+
+    listed = f"ranks {rank_range(start, start + len(shown) - 1)}" if shown else "none listed (--count 0)"
     out.write(wrap_words(f"{document['algebra']} at level {document['level']} of {tower.spec}: "
                          f"{document['total']} diagrams; {listed}", fit, "    ", args.exact))
     width = len(str(start + len(shown) - 1)) if shown else 1
