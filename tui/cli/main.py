@@ -52,7 +52,10 @@ def build_parser(command: str | None = None) -> argparse.ArgumentParser:
         description="Exact Bratteli diagrams of tensor-power towers. With no command: open the "
         "explorer on the demo session.",
         epilog="The CLI contract: what --json prints (fields, exact integers), the spec, level and label "
-        "syntax and the exit statuses (2 for bad input) stay fixed for scripts; README, 'For scripts'.",
+        "syntax and the exit statuses (2 for bad input) stay fixed for scripts; README, 'For scripts'. "
+        "Text output fits the terminal; piped or redirected it is 80 columns wide unless COLUMNS asks for "
+        "more (COLUMNS=200 towerscope ...). A number too wide is shortened with its digit count; --exact "
+        "prints every digit; JSON and CSV are always exact.",
     )
     sub = parser.add_subparsers(dest="command", metavar="COMMAND", parser_class=_Parser)
     name = commands.module_for(command) if command else None

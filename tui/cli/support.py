@@ -47,9 +47,10 @@ def console():
     """A rich console on stdout (rich is imported only when a table is printed)."""
     from rich.console import Console
 
-    # piped output is for reading in a file or a pager: do not wrap it at 80 columns
-    width = None if sys.stdout.isatty() else 240
-    return Console(highlight=False, soft_wrap=False, width=width)
+    from tui.cli.fit import output_width
+
+    # the width of every text table: the terminal's, COLUMNS when set, 80 when piped
+    return Console(highlight=False, soft_wrap=False, width=output_width())
 
 
 class DelayedProgress:
