@@ -32,7 +32,8 @@ async def test_growth_walk_and_graph_at_80x24() -> None:
         assert "periodic (period 2)" in text(app, "#growth-title")
         await pilot.press("3")
         graph = text(app, "#growth-graph-text")
-        assert "o:6" in graph and "d=6" in graph and "9 nodes" in text(app, "#growth-title")
+        assert "o:6 d6" in graph and "┴" in graph and "9 nodes" in text(app, "#growth-title")
+        assert screen.picture_drawn
         await pilot.press("escape")
         assert not isinstance(app.screen, GrowthScreen)
 

@@ -1,7 +1,8 @@
 """The finite-tower view (key w): for the selected node, log10 m(k) against k with the asymptotic
 line log10(p·d/|G|) + k·log10(dim V); the random walk's total-variation distance against k (and the lazy walk's) (exact
-rationals from the engine, their logarithms plotted); and the McKay graph of the repeating step,
-every node with its dimension and its neighbours with edge counts.  Keys 1, 2, 3 switch between
+rationals from the engine, their logarithms plotted); and the McKay graph of the repeating step
+drawn in text cells (``widgets/mckay_picture.py``: names, dimensions, edge counts, loops), or
+where it does not fit the window, every node with its dimension and its neighbours.  Keys 1, 2, 3 switch between
 them; Esc or w closes.  The screen holds no mathematics: it asks ``engine.export.finite_documents``."""
 
 from __future__ import annotations
@@ -63,6 +64,7 @@ class GrowthScreen(Screen[None]):
         self.walk: dict | None = None
         self.lazy: dict | None = None
         self.problem: str | None = None
+        self.picture_drawn = False  # the McKay graph as a picture (else as a list: no room)
 
     def compose(self) -> ComposeResult:
         yield Static(Text("reading the tower…"), id="growth-title")
@@ -101,6 +103,7 @@ class GrowthScreen(Screen[None]):
             self._draw_walk(plot, title)
         else:
             self._draw_graph(title)
+            self.call_after_refresh(self.on_resize)  # again at the size the layout gives
 
     def _draw_growth(self, plot: PlotextPlot, title: Static) -> None:
         g = self.growth
@@ -144,21 +147,22 @@ class GrowthScreen(Screen[None]):
 
     def _draw_graph(self, title: Static) -> None:
         from engine.series.finite import finite_view
+        from tui.explorer.widgets.mckay_picture import picture_text
 
         view = finite_view(self.state.tower, "the McKay graph")
-        width = max(len(label) for label in view.labels)
-        lines = Text()
-        for i, label in enumerate(view.labels):
-            edges = []
-            for j, m in enumerate(view.matrix[i]):
-                if m:
-                    edges.append(f"{view.labels[j]}" + (f"×{m}" if m > 1 else "") + (" (loop)" if i == j else ""))
-            mark = "◆" if i == view.root else "●"
-            lines.append(f"{mark} {label:<{width}} d={view.dimensions[i]:<4}", style="bold" if i == view.root else "")
-            lines.append(" ── " + ", ".join(edges) + "\n")
-        self.query_one("#growth-graph-text", Static).update(lines)
+        graph = self.query_one("#growth-graph", VerticalScroll)
+        width, height = graph.size.width - 1, graph.size.height
+        if width < 10 or height < 3:  # not laid out yet: drawn again on the next resize
+            width, height = max(self.size.width - 1, 10), max(self.size.height - 3, 3)
+        text, drawn = picture_text(view, width, height)
+        self.picture_drawn = drawn
+        self.query_one("#growth-graph-text", Static).update(text)
         title.update(Text(f"1 growth  2 walk  3 McKay graph │ the step of {view.spec}: {view.size} nodes, "
                           f"Σ_j M_ij d_j = {view.constant}·d_i, ◆ the root"))
+
+    def on_resize(self) -> None:
+        if self.mode == "graph" and self.problem is None:
+            self._draw_graph(self.query_one("#growth-title", Static))
 
     def action_close(self) -> None:
         self.dismiss(None)
