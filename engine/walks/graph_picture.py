@@ -12,6 +12,7 @@ falls back to a list."""
 from __future__ import annotations
 
 from dataclasses import dataclass
+from functools import lru_cache
 
 from engine.walks.graph_layout import Edge, Layout, components, graph_edges, lay_out
 
@@ -165,6 +166,7 @@ def _draw(layout: Layout, canvas: _Canvas, top: int, left: int, notes: list[Note
     return placed
 
 
+@lru_cache(maxsize=32)
 def draw_graph(labels: tuple[str, ...], dimensions: tuple[int, ...], matrix: tuple[tuple[int, ...], ...],
                root: int, width: int, height: int) -> Picture | NoRoom:
     """The picture of the graph of ``matrix`` (rows and columns in the order of ``labels``) in at
@@ -175,10 +177,17 @@ def draw_graph(labels: tuple[str, ...], dimensions: tuple[int, ...], matrix: tup
     edges, loops = graph_edges(matrix)
     texts = {i: node_text(labels[i], dimensions[i], loops.get(i, 0), i == root) for i in range(n)}
     labelled = {e for e in edges if e.count > 1 or e.directed}
+    split = components(n, edges, root)
+    # lower bounds before any layout: a node row and a band row per layer; a layer's labels in a row
+    low_height = max(2 * len(layers) - 1 for layers in split)
+    low_width = max(sum(len(texts[i]) + 1 for i in layer) - 1 for layers in split for layer in layers)
+    if low_height > height or low_width > width:
+        return NoRoom(low_width, low_height, f"the picture needs at least {low_width}×{low_height} cells, "
+                      f"{width}×{height} are free")
     best: NoRoom | None = None
     for gap in (2, 1):
         parts = []
-        for layers in components(n, edges, root):
+        for layers in [[list(layer) for layer in layers] for layers in split]:
             members = {i for layer in layers for i in layer}
             mine = [e for e in edges if e.a in members]
             parts.append(lay_out(layers, mine, {i: texts[i] for i in members}, labelled, gap))
