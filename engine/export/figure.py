@@ -24,7 +24,14 @@ CM_PER_PT = 2.54 / 72.27
 #: type sizes (pt) a figure may use for node names, largest first; TikZ names them
 SIZES = (9.0, 7.0, 5.0)
 X_STEP, Y_STEP = 1.6, 1.5  # cm between nodes and between rows, at full size
-LEVEL_COLUMN = 1.3  # cm left of the nodes for the "k = ..." column
+LEVEL_GAP = 0.2  # cm between the "k = ..." column and the leftmost node
+#: Computer Modern is wider per point at small sizes (optical sizes): the em estimate is scaled by
+#: these factors, measured once with pdflatex on names such as (4,1,1) and k = 3 1/2 (\small, \scriptsize, \tiny)
+WIDER = {9.0: 1.0, 7.0: 1.06, 5.0: 1.32}
+#: inner padding of a name in TikZ and SVG (1.5pt on each side), cm
+PAD = 3.0 * 2.54 / 72.27
+#: the part of a width asked for that the estimate may fill (what it misses stays inside)
+SAFETY = 0.97
 BOX = 0.18  # cm: the side of a Young diagram's box at full size
 MULTIPLICITY_DIGITS = 9  # longer multiplicities are written m·10^e in a figure
 
@@ -75,6 +82,7 @@ class Figure:
     left: float = 0.0
     right: float = 0.0
     bottom: float = 0.0
+    level_x: float = 0.0  # the right end of the "k = ..." labels
 
     @property
     def width(self) -> float:
@@ -136,6 +144,13 @@ def parts_length(parts: list[Part]) -> float:
     return sum(len(t) * (0.7 if k in ("sub", "sup") else 1.0) for t, k in parts) * 0.52
 
 
+def text_cm(parts: list[Part], size: float) -> float:
+    """Estimated width of set text at ``size`` pt, in cm (with ``WIDER``; a ½ counts as two characters,
+    TeX sets it as a fraction)."""
+    halves = sum(t.count("½") for t, _ in parts) * 0.52 * 0.9
+    return (parts_length(parts) + halves) * size * CM_PER_PT * WIDER.get(size, 1.0)
+
+
 def level_parts(value) -> list[Part]:
     """``k = 2½`` (a half written with the vulgar fraction, as printed tables do)."""
     whole, rest = divmod(value, 1)
@@ -155,30 +170,43 @@ def build_figure(diagram: Diagram, upto: int, options: FigureOptions) -> Figure:
     widest = layout.widest
     names = {(i, n): name_parts(tower.format(n), root=(i == 0)) for i, row in enumerate(layout.rows) for n in row}
     youngs = {key: partition_of(key[1]) if options.young else None for key in names}
-    longest = max(parts_length(p) for p in names.values())
+    counts = {key: number_parts(diagram.level(key[0])[key[1]]) for key in names}
     deepest = max((len(y) for y in youngs.values() if y), default=0)
     broadest = max((y[0] for y in youngs.values() if y), default=0)
+    level_names = [level_parts(tower.level_of(i)) for i in range(upto + 1)]
+
+    def widths_at(size: float) -> tuple[float, float]:
+        """The widest node text (a name unless Young diagrams stand for it, its multiplicity) and the
+        level column, in cm, at ``size``."""
+        small = size - 2 if size > 5 else size
+        named = [text_cm(p, size) for key, p in names.items() if not youngs[key]]
+        text = max(named + [text_cm(c, small) for c in counts.values()]) + PAD
+        column = max(text_cm(p, size) for p in level_names) + PAD + LEVEL_GAP
+        return text, column
+
     x_step, size, box = X_STEP, SIZES[0], BOX
     if options.width_cm is not None:
-        room = options.width_cm - LEVEL_COLUMN
         for size in SIZES:
-            node_w = max(longest * size * CM_PER_PT, broadest * box)
-            x_step = (room - node_w) / max(widest - 1, 1) if widest > 1 else X_STEP
-            x_step = min(x_step, X_STEP)
-            if longest * size * CM_PER_PT <= 0.92 * x_step:
+            text, column = widths_at(size)
+            room = options.width_cm * SAFETY - column
+            node_w = max(text, broadest * box)
+            x_step = min((room - node_w) / (widest - 1) if widest > 1 else X_STEP, X_STEP)
+            if text <= 0.92 * x_step or widest == 1:
                 break
         if broadest:
-            box = min(BOX, 0.85 * x_step / broadest, (room - 0.2) / broadest)
-        if x_step <= 0.05:
+            box = min(BOX, 0.85 * x_step / broadest, max(room - 0.2, 0.05) / broadest)
+        if x_step <= 0.05 or room < max(text, broadest * box):
             raise UserError(f"--width {options.width_cm:g}cm is too narrow for {widest} nodes side by side")
+    text, column = widths_at(size)
     y_step = Y_STEP + (max(deepest * box - 0.35, 0) if options.young else 0)
     nodes: dict[tuple[int, Hashable], FigureNode] = {}
     for i, row in enumerate(layout.rows):
         level = diagram.level(i)
         for n in row:
             young = youngs[(i, n)]
-            text_w = parts_length(names[(i, n)]) * size * CM_PER_PT
-            width = max(young[0] * box if young else text_w, 0.3)
+            small = size - 2 if size > 5 else size
+            text_w = max(text_cm(counts[(i, n)], small), 0 if young else text_cm(names[(i, n)], size)) + PAD
+            width = max(young[0] * box if young else 0, text_w, 0.3)
             height = (len(young) * box if young else size * CM_PER_PT * 1.2) + size * CM_PER_PT
             nodes[(i, n)] = FigureNode(f"n{i}x{layout.slots[(i, n)]}", layout.position(i, n) * x_step,
                                        i * y_step, names[(i, n)], number_parts(level[n]), young, box,
@@ -186,12 +214,13 @@ def build_figure(diagram: Diagram, upto: int, options: FigureOptions) -> Figure:
     edges = [FigureEdge(nodes[(i, a)], nodes[(i + 1, b)], e, (i, a, b) in lit_edges)
              for i, row_edges in enumerate(layout.edges) for a, b, e in row_edges]
     half = max(node.width for node in nodes.values()) / 2
-    left = -(widest - 1) / 2 * x_step - half - LEVEL_COLUMN
+    level_x = -(widest - 1) / 2 * x_step - half - LEVEL_GAP
+    left = level_x - (column - LEVEL_GAP)
     right = (widest - 1) / 2 * x_step + half
-    levels = [(i * y_step, level_parts(tower.level_of(i))) for i in range(upto + 1)]
+    levels = [(i * y_step, level_names[i]) for i in range(upto + 1)]
     return Figure(tower.spec, list(nodes.values()), edges, levels, size, layout,
                   _legend(diagram, options, bool(lit_nodes)), bool(lit_nodes), left, right,
-                  upto * y_step + max(n.height for n in nodes.values()))
+                  upto * y_step + max(n.height for n in nodes.values()), level_x)
 
 
 def _highlight_target(diagram: Diagram, upto: int, text: str) -> tuple[int, Hashable]:

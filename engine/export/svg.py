@@ -125,7 +125,7 @@ def figure_to_svg(figure: Figure, legend: bool = True) -> str:
                        f'width="{_n(tiny * 0.8 * len(str(edge.count)))}" height="{_n(tiny * 1.1)}" fill="white"/>')
             out.append(_text([(str(edge.count), "text")], mx, my + tiny * 0.35, tiny))
     for y, parts in figure.levels:
-        out.append(_text(parts, figure.left + 1.1, y + size * 0.35, size, anchor="end"))
+        out.append(_text(parts, figure.level_x, y + size * 0.35, size, anchor="end"))
     for node in figure.nodes:
         _node(node, size, out)
     bottom = figure.bottom + 0.2

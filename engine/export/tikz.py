@@ -79,10 +79,10 @@ def figure_to_tikz(figure: Figure, legend: bool = True) -> str:
         "  lit/.style={line width=1.4pt, black}, count/.style={fill=white, inner sep=0.8pt, font=\\tiny}]",
     ]
     for y, parts in figure.levels:
-        lines.append(f"  \\node[anchor=east] at ({_c(figure.left + 1.1)},{_c(-y)}) {{${math_of(parts)}$}};")
+        lines.append(f"  \\node[anchor=east, inner sep=1.5pt] at ({_c(figure.level_x)},{_c(-y)}) {{${math_of(parts)}$}};")
     for node in figure.nodes:
         weight = "\\boldmath" if node.lit else ""
-        count = f"{small}{weight}${math_of(node.multiplicity)}$"
+        count = f"{{{small}{weight}${math_of(node.multiplicity)}$}}"  # grouped: \boldmath must not leak past the line
         if node.young is not None:
             _young(node, lines)
             tall = max(len(node.young) * node.box, 0.3)
@@ -98,7 +98,7 @@ def figure_to_tikz(figure: Figure, legend: bool = True) -> str:
         label = f" node[midway, count] {{{edge.count}}}" if edge.count > 1 else ""
         lines.append(f"  \\draw[{style}] ({edge.start.name}) --{label} ({edge.end.name});")
     if legend:
-        lines.append(f"  \\node[anchor=north west, text width={max(figure.width - 0.2, 2):.2f}cm, align=left, "
+        lines.append(f"  \\node[anchor=north west, inner sep=0pt, text width={max(figure.width, 2):.2f}cm, align=left, "
                      f"font=\\scriptsize] at ({_c(figure.left)},{_c(-figure.bottom - 0.2)}) {{{tex_escape_math(figure.legend)}}};")
     lines.append("\\end{tikzpicture}")
     return "\n".join(lines) + "\n"

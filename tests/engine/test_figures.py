@@ -190,22 +190,63 @@ def test_export_command_writes_svg_and_reports_crossings(tmp_path, capsys):
     assert main(["export", S6, "--to", "4", "-o", str(tmp_path / "s6.csv"), "--young"]) == 2
 
 
-PREAMBLE = "\\documentclass[tikz]{standalone}\n\\begin{document}\n"
+#: every picture in one article (the classes every TeX installation has), each measured in a box whose
+#: width pdflatex writes to its log (TeX's \wd, in pt: 72.27 pt = 1 in, the TeXbook)
+DOCUMENT = ("\\documentclass{article}\n\\usepackage{tikz}\n"
+            "\\usepackage[margin=1cm,paperwidth=40cm,paperheight=80cm]{geometry}\n"
+            "\\newsavebox\\towerfig\n\\begin{document}\n%s\\end{document}\n")
+MEASURED = "\\savebox\\towerfig{%s}\n\\typeout{FIGURE %d WIDTH=\\the\\wd\\towerfig}\n\\usebox\\towerfig\n\\newpage\n"
+
+COMPILED = [  # (spec, last level, options): names of every kind, Young diagrams, highlight, widths, legends
+    (S6, "4", FigureOptions(width_cm=12.0)),
+    (S6, "4", FigureOptions(width_cm=12.0, young=True, highlight="(3,2,1)@4")),
+    (S6, "4", FigureOptions(width_cm=8.0, order="plain", legend=False)),
+    ("su2:kind=icosahedral", "8", FigureOptions(young=True, highlight="o:6@5")),  # a_4, the bold 1
+    ("su2:kind=binary-dihedral,m=3", "5", FigureOptions(width_cm=5.0)),
+    ("characters:group=dihedral(5),module=r1", "5", FigureOptions()),  # r_1, e
+    ("characters:file=sessions/examples/a4-points.toml", "3", FigureOptions(young=True)),
+    ("alternating:n=4", "3", FigureOptions(young=True)),  # (2,1,1)^+ and its sign
+    ("mixed:n=3,word=vdvd", "4", FigureOptions(young=True)),  # pairs of partitions
+    ("symmetric:n=4,halves=no", "4", FigureOptions(young=True, width_cm=5.0)),
+    ("symmetric:n=5", "12", FigureOptions(width_cm=12.0)),  # multiplicities m·10^e
+]
 
 
 @pytest.mark.skipif(shutil.which("pdflatex") is None, reason="pdflatex is not installed: the TikZ pictures "
                     "are checked for structure only")
-def test_tikz_compiles_and_fits_12cm(tmp_path):
-    d = _diagram(S6)
-    for options in (FigureOptions(width_cm=12.0), FigureOptions(width_cm=12.0, young=True, highlight="(3,2,1)@4")):
-        (tmp_path / "f.tex").write_text(PREAMBLE + to_tikz(d, S6_TO_4, options) + "\\end{document}\n")
-        run = subprocess.run(["pdflatex", "-interaction=nonstopmode", "-halt-on-error", "f.tex"], cwd=tmp_path,
-                             capture_output=True, text=True, timeout=120)
-        assert run.returncode == 0, run.stdout[-2000:]
-        pdf = (tmp_path / "f.pdf").read_bytes()
-        box = re.search(rb"/MediaBox\s*\[\s*([-\d.]+)\s+([-\d.]+)\s+([-\d.]+)\s+([-\d.]+)", pdf)
-        width_cm = (float(box.group(3)) - float(box.group(1))) * 2.54 / 72  # PDF units: 1/72 in
-        assert width_cm <= 12.3  # standalone adds no border by default
+def test_tikz_compiles_and_fits_the_width_asked_for(tmp_path):
+    from engine.levels import parse_level
+
+    pictures = []
+    for spec, last, options in COMPILED:
+        d = _diagram(spec)
+        upto = d.tower.index_of(parse_level(last))
+        pictures.append(MEASURED % (to_tikz(d, upto, options), len(pictures)))
+    (tmp_path / "f.tex").write_text(DOCUMENT % "".join(pictures))
+    run = subprocess.run(["pdflatex", "-interaction=nonstopmode", "-halt-on-error", "f.tex"], cwd=tmp_path,
+                         capture_output=True, text=True, timeout=300)
+    assert run.returncode == 0, run.stdout[-3000:]
+    widths = {int(i): float(w) * 2.54 / 72.27 for i, w in re.findall(r"FIGURE (\d+) WIDTH=([\d.]+)pt", run.stdout)}
+    assert sorted(widths) == list(range(len(COMPILED)))
+    for i, (spec, last, options) in enumerate(COMPILED):
+        if options.width_cm is not None:
+            assert widths[i] <= options.width_cm, (spec, options, widths[i])
+    assert widths[0] > 11.0  # the width is used, not only respected
+
+
+@pytest.mark.skipif(shutil.which("pdflatex") is None, reason="pdflatex is not installed: the TikZ pictures "
+                    "are checked for structure only")
+def test_exported_tikz_file_inputs_into_a_document_at_12cm(tmp_path, capsys):
+    # the README's use: export to a .tikz file, \input it in a document that loads tikz
+    from tui.cli.main import main
+
+    assert main(["export", S6, "--to", "4", "-o", str(tmp_path / "s6.tikz"), "--width", "12cm"]) == 0
+    (tmp_path / "f.tex").write_text(DOCUMENT % (MEASURED % ("\\input{s6.tikz}", 0)))
+    run = subprocess.run(["pdflatex", "-interaction=nonstopmode", "-halt-on-error", "f.tex"], cwd=tmp_path,
+                         capture_output=True, text=True, timeout=120)
+    assert run.returncode == 0, run.stdout[-3000:]
+    width = float(re.search(r"FIGURE 0 WIDTH=([\d.]+)pt", run.stdout).group(1)) * 2.54 / 72.27
+    assert 11.0 < width <= 12.0
 
 
 def test_crossings_between_agrees_with_counting_every_pair():
