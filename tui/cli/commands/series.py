@@ -48,7 +48,7 @@ def run(args: argparse.Namespace) -> int:
         return 0
     _line(out, document, polynomial_text)
     if "closed_form" in document:
-        out.write(f"  m(k) = {document['closed_form']}   (0^k is 1 at k\u00a0=\u00a00, else\u00a00)\n")
+        out.write(f"  {document.get('closed_form_of', 'm(k)')} = {document['closed_form']}   (0^k is 1 at k\u00a0=\u00a00, else\u00a00)\n")
     out.flush()
     return 0
 
