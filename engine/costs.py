@@ -16,7 +16,11 @@ text in time ∝ d².
 from __future__ import annotations
 
 from dataclasses import dataclass
-from math import log10
+from math import isqrt, log10
+from typing import TYPE_CHECKING
+
+if TYPE_CHECKING:
+    from engine.tower import Tower
 
 #: seconds per edge walked with machine-size multiplicities (learning the edge included)
 T_EDGE = 4e-7
@@ -62,6 +66,31 @@ def _seconds(value: float) -> str:
 def digits_of(value: int) -> int:
     """Decimal digits of a positive int, from its bit length (no conversion to text)."""
     return max(1, int(value.bit_length() * log10(2)) + 1)
+
+
+#: up to this level index the digits are also bounded by the diagram algebra's dimension (past it
+#: the tensor dimension's bound is within a factor 10 anyway, see ``multiplicity_digits``)
+ALGEBRA_BOUND_LEVELS = 64
+
+
+def multiplicity_digits(tower: "Tower", index: int, tensor_digits: int) -> int:
+    """Decimal digits bounding every multiplicity at ``index``: those of the tensor dimension
+    (Σ m·dim = dim V^{⊗k}), and, where the family has a diagram algebra mapping onto the centralizer,
+    those of √(its dimension) (m² ≤ Σ m² = dim of the centralizer ≤ dim of the algebra).
+
+    The second bound matters for large N at low levels: GL_N at level k has multiplicities f^λ of
+    about ½·log10 k! digits (their squares sum to k!: Schur–Weyl duality, Fulton and Harris,
+    *Representation Theory*, §6.1) while (dim V)^k has k·log10 N, more than 10 times as many only
+    while N > (k/e)^5, i.e. k ≤ 11 for N ≤ 1000 (Brauer and partition algebras: fewer levels);
+    so it is computed only up to ``ALGEBRA_BOUND_LEVELS``, where the dimensions are small."""
+    if index > ALGEBRA_BOUND_LEVELS:
+        return tensor_digits
+    from engine.capabilities import DiagramAlgebra
+
+    algebra = tower.capability(DiagramAlgebra)
+    if algebra is None:
+        return tensor_digits
+    return min(tensor_digits, digits_of(max(1, isqrt(algebra.dimension(index)))))
 
 
 def estimate(edges: int, nodes: int, digits: int, extra: int = 0, printed: bool = False,

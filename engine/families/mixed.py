@@ -20,7 +20,7 @@ from __future__ import annotations
 
 from fractions import Fraction
 from math import factorial
-from typing import Sequence
+from typing import TYPE_CHECKING, Sequence
 
 from engine.capabilities import AlgebraLevel, Capability, DiagramAlgebra, Encodings, SizeGuard
 from engine.classical_dimensions import mixed_dimension
@@ -30,6 +30,9 @@ from engine.partition_tower import ESTIMATE_CAP, CountTable, corner_bound, vecto
 from engine.partitions import Partition, larger_by_one_box, smaller_by_one_box
 from engine.specs import Family
 from engine.tower import Edge, Tower
+
+if TYPE_CHECKING:
+    from engine.pair_counts import PairCounts
 
 _MAX_WORD = 100_000
 
@@ -41,6 +44,8 @@ class MixedTower(Tower):
         self.n = n
         self.word = word
         self.max_index = len(word)
+        self._pairs: "PairCounts | None" = None  # the exact node counts of the size guard, kept
+        self._estimated: dict[int, tuple[int, int]] = {}
         # r_i and s_i: letters v and d among the first i letters
         self._r = [0]
         for letter in word:
@@ -117,24 +122,37 @@ class MixedTower(Tower):
         return self.algebra_level(index).name
 
     def _estimates(self, upto: int) -> tuple[int, int]:
-        """(edges, nodes) over levels 0..upto: Σ over levels of Σ_t p_N(r−t)·p_N(s−t) nodes
-        (p_N: partitions with at most N rows) times a bound on the boxes one can add or remove
-        (at most N+1 corners, and √(2k)+2); past level 2000 each level's sum is bounded by
-        (min(r,s)+1)·p_N(r)·p_N(s) (p_N grows), which costs one step."""
+        """(edges, nodes) over levels 0..upto: the nodes of each level counted exactly
+        (``engine.pair_counts``: pairs with ℓ(α) + ℓ(β) ≤ N), times a bound on the children of a
+        node (one box added to α or removed from β, or the reverse: at most ℓ(α) + 1 + ℓ(β) ≤ N + 1,
+        and at most two corner bounds √(2k) + 2).  Once the exact count's budget is spent, each
+        level is bounded by Σ_t p_N(r−t)·p_N(s−t) (p_N: partitions with at most N rows), past
+        level 2000 by (min(r,s)+1)·p_N(r)·p_N(s) (p_N grows), which costs one step."""
         upto = min(upto, self.max_index)
-        counts = CountTable(upto, self.n)
+        if upto in self._estimated:  # the diagram asks for edges and nodes of the same levels
+            return self._estimated[upto]
+        if self._pairs is None:
+            from engine.pair_counts import PairCounts
+
+            self._pairs = PairCounts(self.n)
+        counts = None
         total = all_nodes = 0
         for index in range(upto + 1):
             r, s = self.counts(index)
-            if index <= 2000:
-                nodes = sum(counts[r - t] * counts[s - t] for t in range(min(r, s) + 1))
-            else:
-                nodes = (min(r, s) + 1) * counts[r] * counts[s]
+            nodes = self._pairs.level(r, s)
+            if nodes is None:
+                counts = counts or CountTable(upto, self.n)
+                if index <= 2000:
+                    nodes = sum(counts[r - t] * counts[s - t] for t in range(min(r, s) + 1))
+                else:
+                    nodes = (min(r, s) + 1) * counts[r] * counts[s]
             all_nodes += nodes
             if index < upto:  # the edges out of the top level are not walked
-                total += nodes * 2 * min(self.n + 1, corner_bound(index))
+                total += nodes * min(self.n + 1, 2 * corner_bound(index))
             if total >= ESTIMATE_CAP:
-                return ESTIMATE_CAP, min(all_nodes, ESTIMATE_CAP)
+                total, all_nodes = ESTIMATE_CAP, min(all_nodes, ESTIMATE_CAP)
+                break
+        self._estimated[upto] = total, all_nodes
         return total, all_nodes
 
     def estimate_edges(self, upto: int) -> int:
