@@ -4,7 +4,10 @@ Targets (issue 12): level 10^6 of su2:kind=icosahedral, every node, under 1 s, a
 Python repeated squaring of the same 9×9 matrix (ratio printed); the generating function of every
 node of characters:group=symmetric(8) (22 irreducibles) under 2 s; walk --steps 1000 on
 characters:group=symmetric(10),module=(9,1), exact, under 5 s.  Each target is timed on a fresh
-tower (its step matrices, Krylov vectors and character table included).
+tower (its step matrices, Krylov vectors and character table included).  Also: the closed forms over
+the whole step's eigenvalues of every node of symmetric:n=8 (whole and half levels) against the
+series alone and against the S_N closed form of engine/closed_forms.py; the McKay graph picture at
+the explorer's sizes (no target: it runs on the UI thread, so it should stay well under 0.1 s).
 """
 
 from __future__ import annotations
@@ -88,6 +91,34 @@ def main() -> None:
     spent, w = timed(walking)
     report("walk --steps 1000, characters:group=symmetric(10),module=(9,1)", spent, 5.0,
            f"(distance at 1000 has {len(str(w.total_variation[-1].denominator)):,} digits below the bar)")
+
+    # 4. closed forms of every node of a tower with half levels
+    from engine.closed_forms import symmetric_closed_form
+    from engine.partitions import parse_partition
+    from engine.series.power_sums import power_sum
+
+    def closed_forms():
+        found = all_series(finite_view(parse_spec("symmetric:n=8"), "bench"))
+        return found, [power_sum(s) for s in found]
+
+    spent, (found, forms) = timed(closed_forms)
+    alone, _ = timed(lambda: all_series(finite_view(parse_spec("symmetric:n=8"), "bench")))
+    symmetric_closed_form.cache_clear()
+    direct, _ = timed(lambda: [symmetric_closed_form(8, parse_partition(s.label), s.half) for s in found])
+    report(f"closed forms over eigenvalues, symmetric:n=8 ({len(forms)} nodes)", spent,
+           extra=f"ratio to the series alone = {spent / alone:.2f}, to engine/closed_forms = {spent / direct:.1f}")
+
+    # 5. the McKay graph picture at the explorer's sizes
+    from engine.walks.graph_picture import draw_graph
+
+    for spec, size in (("su2:kind=icosahedral", (79, 19)), ("characters:group=symmetric(5),module=(4,1)", (79, 19)),
+                       ("characters:group=symmetric(7),module=(6,1)", (159, 43)),
+                       ("characters:group=symmetric(8),module=(7,1)", (159, 43))):
+        view = finite_view(parse_spec(spec), "bench")
+        args = (view.labels, view.dimensions, view.matrix, view.root, *size)
+        spent, drawn = timed(lambda: draw_graph.__wrapped__(*args))
+        what = f"{drawn.width}x{drawn.height}" if hasattr(drawn, "rows") else "refused, " + drawn.reason
+        report(f"McKay graph picture {spec} in {size[0]}x{size[1]}", spent, extra=f"({what})")
 
 
 if __name__ == "__main__":
