@@ -19,7 +19,7 @@ from math import log10
 from typing import Callable, Hashable, Iterator, Protocol
 
 from engine.capabilities import AlgebraLevel, ClosedForm, DiagramAlgebra, LevelJump, SizeGuard
-from engine.costs import Cost, digits_of, estimate
+from engine.costs import Cost, digits_of, estimate, multiplicity_digits
 from engine.errors import Cancelled, TooLarge
 from engine.path_counts import PathCounts
 from engine.tower import Edge, Node, Tower
@@ -119,7 +119,8 @@ class Diagram:
 
     def cost(self, upto: int, start: int = 0, printed: bool = False, kept: bool = True) -> Cost:
         """The estimated cost of building levels start..upto (``engine.costs``): edges, nodes and
-        digits from the family's size guard, the digits of the tensor dimension where it gives none."""
+        digits from the family's size guard, where it gives none those of the tensor dimension (and of
+        the square root of the diagram algebra's dimension, ``engine.costs.multiplicity_digits``)."""
         guard = self._guard
         edges = nodes = 0
         if guard is not None:
@@ -132,7 +133,7 @@ class Diagram:
         if guard is not None and guard.digits is not None:
             digits = guard.digits(upto)
         else:
-            digits = self._tensor_digits(upto)
+            digits = multiplicity_digits(self.tower, upto, self._tensor_digits(upto))
         extra = guard.extra(upto) if guard is not None and guard.extra is not None else 0
         return estimate(edges, nodes, digits, extra, printed, kept, upto - start + 1)
 
