@@ -110,10 +110,15 @@ def components(n: int, edges: list[Edge], root: int) -> list[list[int]]:
         layers = [[start]]
         seen.add(start)
         while True:
-            nxt = [j for i in layers[-1] for j in sorted(around[i]) if j not in seen and not seen.add(j)]  # type: ignore[func-returns-value]
-            if not nxt:
+            following: list[int] = []
+            for i in layers[-1]:
+                for j in sorted(around[i]):
+                    if j not in seen:
+                        seen.add(j)
+                        following.append(j)
+            if not following:
                 break
-            layers.append(nxt)
+            layers.append(following)
         out.append(layers)
     return out
 
@@ -138,36 +143,33 @@ def _order(layers: list[list[int]], edges: list[Edge]) -> None:
 def _place(layer: list[int], widths: dict[int, int], desired: dict[int, Fraction | None],
            blocked: set[int], allowed: dict[int, int], gap: int) -> dict[int, int]:
     """Start columns for ``layer`` (left to right, ``gap`` apart) of least Σ|port − desired|,
-    no port in ``blocked`` except a node's own ``allowed`` one."""
+    no port in ``blocked`` except a node's own ``allowed`` one (a node wanting nothing: leftmost).
+    Dynamic programming over the start columns: best[k][s] is the least cost of the first k + 1
+    nodes with node k starting at s, with the start of node k − 1 that gives it."""
     wanted = [d for d in desired.values() if d is not None]
-    total = sum(widths[i] + gap for i in layer)
-    lo = int(min(wanted, default=0)) - total - 2
-    hi = int(max(wanted, default=0)) + total + 2
-    positions = range(lo, hi + 1)
-    infinity = float("inf")
-    best: list[dict[int, tuple[object, int | None]]] = []
+    margin = sum(widths[i] + gap for i in layer) + 3 * len(layer) + 4  # room for every node beside the blocked
+    lo = int(min(wanted, default=0)) - margin
+    positions = range(lo, int(max(wanted, default=0)) + margin + 1)
+    best: list[dict[int, tuple[Fraction, int | None]]] = []
     for k, node in enumerate(layer):
         half = (widths[node] - 1) // 2
-        row: dict[int, tuple[object, int | None]] = {}
-        running: tuple[object, int | None] = (infinity, None)
-        previous = best[-1] if best else None
+        previous = best[-1] if k else None
         need = widths[layer[k - 1]] + gap if k else 0
+        cheapest: tuple[Fraction, int] | None = None  # over the previous starts ≤ s − need
+        row: dict[int, tuple[Fraction, int | None]] = {}
         for s in positions:
             if previous is not None:
-                cand = previous.get(s - need)
-                if cand is not None and (running[0] == infinity or cand[0] < running[0]):  # type: ignore[operator]
-                    running = (cand[0], s - need)
-            base = 0 if previous is None else running[0]
-            if base == infinity:
-                continue
+                candidate = previous.get(s - need)
+                if candidate is not None and (cheapest is None or candidate[0] < cheapest[0]):
+                    cheapest = (candidate[0], s - need)
+                if cheapest is None:
+                    continue
             port = s + half
             if port in blocked and allowed.get(node) != port:
                 continue
             want = desired[node]
-            cost = Fraction(0) if want is None else abs(port - want)
-            if want is None and previous is None:
-                cost = Fraction(s - lo)  # the first layer: leftmost
-            row[s] = (base + cost, running[1] if previous is not None else None)  # type: ignore[operator]
+            cost = Fraction(s - lo) if want is None else abs(port - want)
+            row[s] = (cost, None) if cheapest is None else (cost + cheapest[0], cheapest[1])
         best.append(row)
     s = min(best[-1], key=lambda x: (best[-1][x][0], x))
     out: dict[int, int] = {}
