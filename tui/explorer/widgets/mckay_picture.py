@@ -49,7 +49,8 @@ def _picture(view: FiniteView, picture: Picture, width: int) -> Text:
         sign = "→" if e.directed else "—"
         out.append(f"{view.labels[e.a]} {sign} {view.labels[e.b]}: {e.count} edge{'s' if e.count > 1 else ''} "
                    "(no room on its line)\n")
-    out.append(" " * pad + legend(picture)[:width], style="dim")
+    words = legend(picture)
+    out.append(" " * max(min(pad, width - len(words)), 0) + words[:width], style="dim")
     return out
 
 
