@@ -261,7 +261,7 @@ class Table:
 #: a lone sign or operator is kept with the term after it: a long sum folds before "+ 3*x^2", never after "+"
 _LEADING = {"+", "-", "−", "=", "×", "·", "⊕"}
 #: inside a word too long for a line, a break may follow one of these (never between two digits)
-_BREAK_AFTER = ",})]|*·⊗;"
+_BREAK_AFTER = ",})]|*·⊗;/"
 _DIGITS = re.compile(r"\d+")
 #: a number with thousands separators, 3,230,608,073 (not in a word holding a diagram's braces)
 _GROUPED = re.compile(r"(?<![\d,])\d{1,3}(?:,\d{3})+(?![\d,])")
@@ -297,9 +297,12 @@ def shorten_digit_runs(word: str, room: int) -> str:
 def _cuts(word: str) -> list[int]:
     """Where a word too long for a line may be cut: after a comma, brace, bar or product sign, never
     between two digits of a number (a diagram's ``{1,2}`` may be cut after its comma, ``3,230,608`` not)."""
-    braces = "{" in word
+    inside: set[int] = set()  # cut positions inside a number 3,230,608 or a fraction 22/7
+    if "{" not in word:
+        for m in [*_GROUPED.finditer(word), *re.finditer(r"\d+/\d+", word)]:
+            inside.update(range(m.start() + 1, m.end()))
     return [i + 1 for i, ch in enumerate(word[:-1]) if ch in _BREAK_AFTER and word[i + 1] not in ",;)}]"
-            and (braces or not (word[i - 1:i].isdigit() and word[i + 1].isdigit()))]
+            and i + 1 not in inside and not (word[i].isdigit() and word[i + 1].isdigit())]
 
 
 def _take(word: str, cuts: list[int], begin: int, room: int) -> int:

@@ -96,8 +96,13 @@ def run_paths(args: argparse.Namespace) -> int:
         out.write(wrap_words(f"{rank:>{width}}  {text}", fit, " " * min(width + 2, 12), args.exact))
         if args.draw:
             for line in encoding.draw(tower, encoding.encode(tower, path)):
-                if line != text:
-                    out.write(" " * (width + 2) + line + "\n")
+                if line == text:
+                    continue
+                pad = " " * min(width + 2, 12)
+                if any("\u2500" <= ch <= "\u257f" for ch in line):  # box drawing: as it is
+                    out.write(pad + line + "\n")
+                else:  # a tableau written in a line: folded after a comma or a row's slash
+                    out.write(wrap_words(pad + line, fit, pad + "  ", args.exact))
     return 0
 
 
