@@ -17,11 +17,25 @@ EXACT_DIGITS_SHOWN = 3000
 _FLINT_BITS = 20_000
 
 
+#: the python-flint copies of the last huge numbers shown (each pane line, the details and the
+#: sums ask for the same few numbers again at every repaint); keyed by identity, the number kept
+_BIG_CACHE: dict[int, tuple[int, object]] = {}
+_BIG_CACHE_SIZE = 64
+_DIGITS_CACHE: dict[int, tuple[int, int]] = {}
+
+
 def _big(n: int):  # noqa: ANN202 - an int or a flint fmpz
     if n.bit_length() > _FLINT_BITS:
+        found = _BIG_CACHE.get(id(n))
+        if found is not None and found[0] is n:
+            return found[1]
         import flint
 
-        return flint.fmpz(n)
+        big = flint.fmpz(n)
+        if len(_BIG_CACHE) >= _BIG_CACHE_SIZE:
+            _BIG_CACHE.pop(next(iter(_BIG_CACHE)))
+        _BIG_CACHE[id(n)] = (n, big)
+        return big
     return n
 
 
@@ -30,9 +44,17 @@ def digit_count(n: int) -> int:
     n = abs(n)
     if n < 10**18:
         return len(str(n))
+    found = _DIGITS_CACHE.get(id(n))
+    if found is not None and found[0] is n:
+        return found[1]
     guess = int(n.bit_length() * math.log10(2))  # floor(log10 n) or one above it
     big = _big(n)
-    return guess if big < big.__class__(10) ** guess else guess + 1
+    digits = guess if big < big.__class__(10) ** guess else guess + 1
+    if n.bit_length() > _FLINT_BITS:
+        if len(_DIGITS_CACHE) >= _BIG_CACHE_SIZE:
+            _DIGITS_CACHE.pop(next(iter(_DIGITS_CACHE)))
+        _DIGITS_CACHE[id(n)] = (n, digits)
+    return digits
 
 
 def short_int(n: int, width: int = 8) -> str:

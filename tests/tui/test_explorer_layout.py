@@ -51,8 +51,6 @@ async def test_the_current_pane_shows_every_label_whole(size: tuple[int, int]) -
             assert len([p for p in app.screen.query(LevelPane) if p.display]) >= 3
 
 
-@pytest.mark.xfail(reason="after app.go(40) on S_40 the background builder leaves the side levels 39 and 41 "
-                   "unbuilt in this test (seen at the end of the session, not yet understood)", strict=False)
 async def test_side_panes_scroll_to_the_neighbours_after_a_jump_to_the_end() -> None:
     app = app_on("symmetric:n=40", search_faithful=False)
     async with app.run_test(size=(160, 48)) as pilot:

@@ -146,6 +146,9 @@ class ExplorerApp(Building, Dialogs, App[None]):
             self.main.redraw_panes()
             if abs(data.index - self.state.index) == 1:
                 self.main.redraw_details()  # the parents or children of a jumped level are known now
+        else:  # built for a plan made before the asked level was shown: a later plan asks again
+            with self._side_lock:
+                self._side_ready_set.discard((self.state.diagram, data.index))
 
     @on(BuildFailed)
     def _build_failed(self, message: BuildFailed) -> None:

@@ -49,7 +49,10 @@ class Building:
         self._request += 1
         self._pending = index
         diagram = self.state.diagram  # type: ignore[attr-defined]
-        self.plan_around(index)
+        if index not in self.shown and vm.by_jump(diagram, index):
+            self.stop_side()  # a jump: the asked level alone first; its LevelsReady plans the side panes
+        else:
+            self.plan_around(index)
         self._build(self._request, diagram, index, node, toward, self.shown.get(index))
 
     @work(thread=True, exclusive=True, group="build", exit_on_error=False)
