@@ -20,7 +20,7 @@ none (``missing``).  No code outside ``engine/families/`` tests a family's name.
 
 from __future__ import annotations
 
-from dataclasses import dataclass
+from engine.records import record
 from fractions import Fraction
 from typing import TYPE_CHECKING, Callable, Hashable, Sequence, TypeVar
 
@@ -61,7 +61,7 @@ def require(tower: "Tower", kind: type[C], who: str = "") -> C:
 
 
 # ----- size guard ------------------------------------------------------------------------------
-@dataclass(frozen=True)
+@record
 class SizeGuard(Capability):
     """Estimates that let the diagram refuse a build before starting it (within a factor 10 of
     the real counts, held by ``tests/engine/test_estimates.py``):
@@ -84,7 +84,7 @@ class SizeGuard(Capability):
 
 
 # ----- closed forms ----------------------------------------------------------------------------
-@dataclass(frozen=True)
+@record
 class ClosedForm(Capability):
     """The multiplicity of a node at any level without counting paths.
 
@@ -107,7 +107,7 @@ class ClosedForm(Capability):
 
 
 # ----- diagram algebras ------------------------------------------------------------------------
-@dataclass(frozen=True)
+@record
 class AlgebraLevel:
     """The diagram algebra of one level, with what its bases, products and actions need.
 
@@ -131,7 +131,7 @@ class AlgebraLevel:
     index: int
 
 
-@dataclass(frozen=True)
+@record
 class DiagramAlgebra(Capability):
     """The diagram algebra that maps onto the centralizer at every level (``at(index)``).
 
@@ -151,7 +151,7 @@ class DiagramAlgebra(Capability):
 
 
 # ----- finite steps ----------------------------------------------------------------------------
-@dataclass(frozen=True)
+@record
 class StepMatrix:
     """One step between finite node sets: M[i][j] edges from ``rows[i]`` to ``columns[j]``.
 
@@ -225,7 +225,7 @@ class FiniteSteps(Capability):
         return self.steps[0].rows[self.root_position]
 
 
-@dataclass(frozen=True)
+@record
 class LevelJump(Capability):
     """A whole level at any depth without building the levels below it (matrix powers, characters
     or a closed form): ``level(index)`` maps every node with a path to its multiplicity;
@@ -237,7 +237,7 @@ class LevelJump(Capability):
     title = "a jump to deep levels"
 
 
-@dataclass(frozen=True)
+@record
 class CharacterData(Capability):
     """A tower built from a character table: the table, the character of V on its classes, and the
     position of each whole-level node in the table (``engine.class_functions.CharacterTable``)."""
@@ -248,7 +248,7 @@ class CharacterData(Capability):
 
 
 # ----- path encodings --------------------------------------------------------------------------
-@dataclass(frozen=True)
+@record
 class Encodings(Capability):
     """The names of the path encodings the family offers (``engine.encodings``), default first.
     ``labels`` is accepted for every tower whether listed or not."""

@@ -16,7 +16,7 @@ exact.  Messages name the row (irreducible) or the class that breaks a rule.
 
 from __future__ import annotations
 
-from dataclasses import dataclass
+from engine.records import record
 from fractions import Fraction
 from typing import Sequence, Union
 
@@ -30,7 +30,7 @@ class TableError(UserError):
     """A character table that breaks a rule of character theory."""
 
 
-@dataclass(frozen=True)
+@record
 class CharacterTable:
     """Classes (the identity first) with their sizes, and irreducible characters (the trivial first)."""
 

@@ -14,7 +14,7 @@ exact rationals b_j, valid for every k ≥ 0 (0^k is 1 at k = 0 and 0 after: it 
 
 from __future__ import annotations
 
-from dataclasses import dataclass
+from engine.records import record
 from fractions import Fraction
 from math import factorial
 from functools import lru_cache
@@ -23,7 +23,7 @@ from engine.combinatorics import stirling2_row
 from engine.partitions import Partition, format_partition, skew_tableaux_count
 
 
-@dataclass(frozen=True)
+@record
 class SymmetricClosedForm:
     """m(k) for one node of ``symmetric:n=N``: Stirling coefficients and the exponential sum."""
 

@@ -15,7 +15,7 @@ text in time ∝ d².
 
 from __future__ import annotations
 
-from dataclasses import dataclass
+from engine.records import record
 from math import isqrt, log10
 from typing import TYPE_CHECKING
 
@@ -38,7 +38,7 @@ TIME_LIMIT = 60.0
 MEMORY_LIMIT = 2 * 10**9
 
 
-@dataclass(frozen=True)
+@record
 class Cost:
     edges: int
     nodes: int

@@ -15,7 +15,7 @@ Goodman, de la Harpe, Jones, *Coxeter Graphs and Towers of Algebras*, 1989, 2.1)
 
 from __future__ import annotations
 
-from dataclasses import dataclass
+from engine.records import record
 from typing import Hashable, Sequence
 
 from engine.capabilities import Capability, Encodings, FiniteSteps, LevelJump, SizeGuard, StepMatrix
@@ -23,7 +23,7 @@ from engine.errors import UserError
 from engine.tower import Edge, Tower
 
 
-@dataclass(frozen=True)
+@record
 class NodeSet:
     """Named irreducible modules with their dimensions.  ``values`` (optional) are the node values
     the tower hands out in their place (e.g. partitions as tuples); by default the labels."""
@@ -40,7 +40,7 @@ class NodeSet:
         return self.labels[i] if self.values is None else self.values[i]
 
 
-@dataclass(frozen=True)
+@record
 class Step:
     name: str
     source: NodeSet

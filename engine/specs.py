@@ -10,7 +10,7 @@ A comma inside parentheses belongs to the value (``module=(5,1)``).
 from __future__ import annotations
 
 import sys
-from dataclasses import dataclass
+from engine.records import record
 from typing import Callable
 
 from engine.errors import SpecError, UserError
@@ -19,7 +19,7 @@ from engine.text import split_outside_parentheses
 from engine.tower import Tower
 
 
-@dataclass(frozen=True)
+@record
 class Family:
     name: str
     summary: str

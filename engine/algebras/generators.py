@@ -22,13 +22,13 @@
 
 from __future__ import annotations
 
-import dataclasses
 from dataclasses import dataclass
 from itertools import permutations
 
 from engine.algebras.action import _permutation_sign
 from engine.algebras.diagrams import Blocks, canonical
 from engine.capabilities import AlgebraLevel
+from engine.records import replace
 
 
 @dataclass(frozen=True)
@@ -57,7 +57,7 @@ def known_generator(level: AlgebraLevel) -> KnownGenerator | None:
             return KnownGenerator(from_orbit({pi: 1}, level), {pi: 1},
                                   f"the orbit-basis element x_π of a set partition into n+1 = {n + 1} blocks")
         small = n + 1
-        sub = dataclasses.replace(level, vertices=small)
+        sub = replace(level, vertices=small)
         pi = tuple((i, small + i) for i in range(small))
         element = {_extend(d, small, r): c for d, c in from_orbit({pi: 1}, sub).items()}
         from engine.algebras.orbit import to_orbit
