@@ -123,14 +123,18 @@ def components(n: int, edges: list[Edge], root: int) -> list[list[int]]:
     return out
 
 
-def _order(layers: list[list[int]], edges: list[Edge]) -> None:
-    """Barycentre sweeps down and up (in place)."""
+def _order(layers: list[list[int]], edges: list[Edge], sweeps: str) -> None:
+    """Barycentre sweeps (in place): ``both`` down and up three times, ``down`` once down, ``none``
+    (the display order kept)."""
+    if sweeps == "none":
+        return
     around: dict[int, set[int]] = {}
     for e in edges:
         around.setdefault(e.a, set()).add(e.b)
         around.setdefault(e.b, set()).add(e.a)
-    for _ in range(3):
-        for sweep in (range(1, len(layers)), range(len(layers) - 2, -1, -1)):
+    rounds = [(range(1, len(layers)), range(len(layers) - 2, -1, -1))] * 3 if sweeps == "both" else [(range(1, len(layers)),)]
+    for directions in rounds:
+        for sweep in directions:
             for li in sweep:
                 ref = layers[li - 1] if sweep.step == 1 else layers[li + 1]
                 where = {node: k for k, node in enumerate(ref)}
@@ -261,9 +265,9 @@ def _route(band: Band, upper: set[int], port: dict[int, int], labelled: set[Edge
 
 
 def lay_out(layers: list[list[int]], edges: list[Edge], texts: dict[int, str], labelled: set[Edge],
-            gap: int = 2) -> Layout:
+            gap: int = 2, sweeps: str = "both") -> Layout:
     """The layout of one component (``edges``: those among its nodes)."""
-    _order(layers, edges)
+    _order(layers, edges, sweeps)
     layer_of = {i: k for k, layer in enumerate(layers) for i in layer}
     bands = [Band() for _ in range(len(layers))]
     up_count: dict[tuple[int, int], int] = {}

@@ -186,11 +186,15 @@ def draw_graph(labels: tuple[str, ...], dimensions: tuple[int, ...], matrix: tup
                       f"{width}×{height} are free")
     best: NoRoom | None = None
     for gap in (2, 1):
-        parts = []
-        for layers in [[list(layer) for layer in layers] for layers in split]:
-            members = {i for layer in layers for i in layer}
-            mine = [e for e in edges if e.a in members]
-            parts.append(lay_out(layers, mine, {i: texts[i] for i in members}, labelled, gap))
+        fitting: list[tuple[int, int, list[Layout]]] = []
+        for sweeps in ("both", "down", "none"):  # the tightest of three orders of the layers
+            parts = []
+            for layers in [[list(layer) for layer in layers] for layers in split]:
+                members = {i for layer in layers for i in layer}
+                mine = [e for e in edges if e.a in members]
+                parts.append(lay_out(layers, mine, {i: texts[i] for i in members}, labelled, gap, sweeps))
+            fitting.append((max(p.height for p in parts), max(p.width for p in parts), parts))
+        parts = min(fitting, key=lambda f: (f[0] > height or f[1] > width, f[0] * f[1], f[0]))[2]
         canvas, notes = _Canvas(), []
         placed: list[tuple[int, int, int]] = []
         top = left = shelf = used_width = 0

@@ -62,3 +62,14 @@ async def test_half_level_tower_draws_its_whole_step() -> None:
         assert app.screen.picture_drawn
         drawn = graph_text(app)
         assert all(p in drawn for p in ("(4) d1", "(3,1) d3 ↺2", "(2,2) d2", "(2,1,1) d3", "(1,1,1,1) d1"))
+
+
+async def test_s8_picture_at_160x48() -> None:
+    # S_8 has 22 irreducibles (OEIS A000041: p(8) = 22); each drawn once with its dimension
+    app = app_on("characters:group=symmetric(8),module=(7,1)")
+    async with app.run_test(size=(160, 48)) as pilot:
+        await _open_graph(pilot)
+        assert app.screen.picture_drawn
+        drawn = graph_text(app)
+        assert "(4,2,1,1) d90" in drawn and "(1,1,1,1,1,1,1,1) d1" in drawn
+        assert max(len(line) for line in drawn.splitlines()) <= 160
