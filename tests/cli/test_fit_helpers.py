@@ -5,7 +5,8 @@ from __future__ import annotations
 
 from fractions import Fraction
 
-from tui.cli.fit import abbreviated, approximate, number_line, wrap_words
+from tui.cli.fit import abbreviated, approximate
+from tui.cli.folding import number_line, wrap_words
 
 
 def _lines(text: str) -> list[str]:

@@ -8,7 +8,8 @@ from typing import Any, Sequence
 
 from engine.diagram import Diagram
 from engine.levels import format_level
-from tui.cli.fit import Column, Table, number_line, output_width, short_number
+from tui.cli.fit import Column, Table, output_width, short_number
+from tui.cli.folding import number_line
 
 
 def _level_text(value: int | float) -> str:

@@ -5,7 +5,6 @@ from __future__ import annotations
 import argparse
 import sys
 
-from tui.cli.fit import add_exact_option
 from tui.cli.support import DelayedProgress, level_index, print_json
 
 
@@ -21,7 +20,8 @@ def add_commands(sub: argparse._SubParsersAction) -> None:
     p.add_argument("spec", help="a tower spec with a diagram algebra, e.g. symmetric:n=3")
     p.add_argument("--level", required=True, metavar="L", help="the level (3, 2.5, 5/2, 2+1/2)")
     p.add_argument("--json", action="store_true", help="one JSON object")
-    add_exact_option(p)
+    p.add_argument("--exact", action="store_true", help="every digit of every number (by default a "
+                   "number too wide for the screen is shortened, with its digit count)")
     p.set_defaults(handler=run_algebra)
 
 
@@ -36,7 +36,7 @@ def run_algebra(args: argparse.Namespace) -> int:
     if args.json:
         print_json(document)
         return 0
-    from tui.cli.fit import FittedOutput
+    from tui.cli.folding import FittedOutput
 
     out = FittedOutput(exact=args.exact)  # a number too wide is shortened with its digit count
     parameter = "none" if document["parameter"] is None else str(document["parameter"])

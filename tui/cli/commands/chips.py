@@ -32,7 +32,7 @@ def run(args: argparse.Namespace) -> int:
     if args.json:
         print_json(document)
         return 0
-    from tui.cli.fit import FittedOutput
+    from tui.cli.folding import FittedOutput
 
     out = FittedOutput()  # lines fitted to the width, broken only at spaces (never inside a number)
 

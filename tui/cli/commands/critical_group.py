@@ -30,7 +30,7 @@ def run(args: argparse.Namespace) -> int:
         print_json(document)
         return 0
     order = document["order"] if document["order"] is not None else "infinite (C̃ is singular: V is not faithful)"
-    from tui.cli.fit import FittedOutput
+    from tui.cli.folding import FittedOutput
 
     out = FittedOutput()  # lines fitted to the width, broken only at spaces (never inside a number)
     out.write(f"critical group of {tower.spec} (sink {document['root']}): {document['group']}\n"

@@ -5,7 +5,6 @@ from __future__ import annotations
 import argparse
 import sys
 
-from tui.cli.fit import add_exact_option
 from tui.cli.support import level_index, print_json
 
 _ORDER = ("Ranks follow the order documented in engine/algebras/bases.py (restricted growth strings for "
@@ -26,7 +25,8 @@ def add_commands(sub: argparse._SubParsersAction) -> None:
     p.add_argument("--draw", action="store_true", help="draw each diagram with box characters")
     p.add_argument("--tikz", action="store_true", help="print each diagram as a TikZ picture")
     p.add_argument("--json", action="store_true", help="one JSON object")
-    add_exact_option(p)
+    p.add_argument("--exact", action="store_true", help="every digit of every number (by default a "
+                   "number too wide for the screen is shortened, with its digit count)")
     p.set_defaults(handler=run_diagrams)
 
 
@@ -46,12 +46,13 @@ def run_diagrams(args: argparse.Namespace) -> int:
     if args.json:
         print_json(document)
         return 0
-    from tui.cli.fit import output_width, wrap_words
+    from tui.cli.fit import output_width
+    from tui.cli.folding import wrap_words
 
     out = sys.stdout  # lines fitted to the width: broken at spaces and between blocks, never in a number
     fit = output_width()
     shown = document["diagrams"]
-    from tui.cli.fit import rank_range
+    from tui.cli.folding import rank_range
 
     listed = f"ranks {rank_range(start, start + len(shown) - 1)}" if shown else "none listed (--count 0)"
     out.write(wrap_words(f"{document['algebra']} at level {document['level']} of {tower.spec}: "

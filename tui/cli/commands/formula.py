@@ -5,7 +5,6 @@ from __future__ import annotations
 import argparse
 import sys
 
-from tui.cli.fit import add_exact_option
 from tui.cli.support import print_json
 
 
@@ -20,7 +19,8 @@ def add_commands(sub: argparse._SubParsersAction) -> None:
     p.add_argument("--label", required=True, metavar="X", help="a partition of N, or of N−1 for half levels")
     p.add_argument("--check", type=int, default=8, metavar="K", help="also print the values at k = 0..K (default 8)")
     p.add_argument("--json", action="store_true", help="one JSON object (coefficients as exact fractions)")
-    add_exact_option(p)
+    p.add_argument("--exact", action="store_true", help="every digit of every number (by default a "
+                   "number too wide for the screen is shortened, with its digit count)")
     p.set_defaults(handler=run)
 
 
@@ -38,7 +38,7 @@ def run(args: argparse.Namespace) -> int:
         print_json(document)
         return 0
     values = document["values"]
-    from tui.cli.fit import FittedOutput
+    from tui.cli.folding import FittedOutput
 
     out = FittedOutput(exact=args.exact)  # lines fitted to the width, broken only at spaces (never inside a number)
 

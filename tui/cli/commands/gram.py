@@ -6,7 +6,6 @@ from __future__ import annotations
 import argparse
 import sys
 
-from tui.cli.fit import add_exact_option
 from tui.cli.support import level_index, open_diagram, print_json
 
 
@@ -25,7 +24,8 @@ def add_commands(sub: argparse._SubParsersAction) -> None:
     p.add_argument("--label", required=True, metavar="LAMBDA", help="the cell label, e.g. (2)")
     p.add_argument("--matrix", action="store_true", help="also print the Gram matrix")
     p.add_argument("--json", action="store_true", help="one JSON object (see the CLI contract)")
-    add_exact_option(p)
+    p.add_argument("--exact", action="store_true", help="every digit of every number (by default a "
+                   "number too wide for the screen is shortened, with its digit count)")
     p.set_defaults(handler=run)
 
 
@@ -44,7 +44,8 @@ def run(args: argparse.Namespace) -> int:
     if args.json:
         print_json(document)
         return 0
-    from tui.cli.fit import KEEP, output_width, wrap_words
+    from tui.cli.fit import KEEP, output_width
+    from tui.cli.folding import wrap_words
 
     blocks = "block" if answer.through == 1 else "blocks"
     lines = [f"cell module {answer.label.text} of {level.name}: {answer.through} propagating {blocks}, "

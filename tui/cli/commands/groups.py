@@ -55,7 +55,8 @@ def run_mckay(args: argparse.Namespace) -> int:
 
 
 def _print_matrix(step: dict[str, Any], title: str) -> None:
-    from tui.cli.fit import Column, Table, wrap_words
+    from tui.cli.fit import Column, Table
+    from tui.cli.folding import wrap_words
 
     # fitted to the width: a wide matrix is split into column blocks that repeat the row names
     columns = [Column("node (dim)", key=True)]
@@ -76,7 +77,7 @@ def run_check(args: argparse.Namespace) -> int:
     if args.json:
         print(json.dumps(report))
         return 0
-    from tui.cli.fit import wrap_words
+    from tui.cli.folding import wrap_words
 
     def say(text: str) -> None:
         sys.stdout.write(wrap_words(text))  # broken only at spaces

@@ -5,7 +5,6 @@ from __future__ import annotations
 import argparse
 import sys
 
-from tui.cli.fit import add_exact_option
 from tui.cli.support import DelayedProgress, level_index, print_json
 
 
@@ -25,7 +24,8 @@ def add_commands(sub: argparse._SubParsersAction) -> None:
     p.add_argument("--basis", choices=("diagram", "orbit"), default="diagram",
                    help="write the kernel elements in this basis (orbit: partition algebras, the x_π with more than N blocks)")
     p.add_argument("--json", action="store_true", help="one JSON object")
-    add_exact_option(p)
+    p.add_argument("--exact", action="store_true", help="every digit of every number (by default a "
+                   "number too wide for the screen is shortened, with its digit count)")
     p.set_defaults(handler=run_kernel)
 
 
@@ -55,7 +55,7 @@ def run_kernel(args: argparse.Namespace) -> int:
         element = {parse_diagram(t["diagram"], level.vertices): t["coefficient"] for t in element_json["terms"]}
         return format_element(element, level)
 
-    from tui.cli.fit import FittedOutput
+    from tui.cli.folding import FittedOutput
 
     out = FittedOutput(exact=args.exact)  # lines fitted to the width, broken only at spaces (never inside a number)
     shown = document["elements"]

@@ -5,7 +5,6 @@ from __future__ import annotations
 import argparse
 import sys
 
-from tui.cli.fit import add_exact_option
 from tui.cli.support import level_index, print_json
 
 
@@ -27,7 +26,8 @@ def add_commands(sub: argparse._SubParsersAction) -> None:
                    help="read the factors and write the product in this basis (orbit: partition algebras)")
     p.add_argument("--draw", action="store_true", help="draw each diagram of the product")
     p.add_argument("--json", action="store_true", help="one JSON object")
-    add_exact_option(p)
+    p.add_argument("--exact", action="store_true", help="every digit of every number (by default a "
+                   "number too wide for the screen is shortened, with its digit count)")
     p.set_defaults(handler=run_multiply)
 
 
@@ -44,7 +44,7 @@ def run_multiply(args: argparse.Namespace) -> int:
         return 0
     level = algebra_at(tower, index)
     result = product(level, args.first, args.second, args.symbolic, args.basis)
-    from tui.cli.fit import FittedOutput
+    from tui.cli.folding import FittedOutput
 
     out = FittedOutput(exact=args.exact)  # folded before a sign or between blocks, never inside a number
     where = "x (symbolic)" if args.symbolic else ("none" if level.parameter is None else str(level.parameter))

@@ -81,11 +81,12 @@ def run_paths(args: argparse.Namespace) -> int:
     tower = paths.diagram.tower
     shown = document["paths"]
     last = start + len(shown) - 1
-    from tui.cli.fit import output_width, wrap_words
+    from tui.cli.fit import output_width
+    from tui.cli.folding import wrap_words
 
     out = sys.stdout
     fit = output_width()
-    from tui.cli.fit import rank_range
+    from tui.cli.folding import rank_range
 
     listed = f"ranks {rank_range(start, last)} as {encoding.title} ({encoding.name})" if shown else "none listed (--count 0)"
     out.write(wrap_words(f"{total} paths to {tower.format(node)} at level {document['level']} of {tower.spec}; {listed}",

@@ -54,7 +54,8 @@ def run(args: argparse.Namespace) -> int:
     else:
         lines.append(f"at x = {x}: {'semisimple' if report.semisimple_at_parameter else 'not semisimple'}")
     lines.append(f"labels: {report.note}")
-    from tui.cli.fit import Column, Table, output_width, wrap_words
+    from tui.cli.fit import Column, Table, output_width
+    from tui.cli.folding import wrap_words
 
     rank_title = "rank" if x is None else f"rank at {x}"
     table = Table([Column("cell", key=True), Column("dimension", "right"), Column(rank_title, "right"),

@@ -29,7 +29,7 @@ def run(args: argparse.Namespace) -> int:
     from engine.series.rational import polynomial_text
     from engine.specs import parse_spec
 
-    from tui.cli.fit import FittedOutput
+    from tui.cli.folding import FittedOutput
 
     tower = parse_spec(args.spec)
     out = FittedOutput()  # long polynomials fold before a sign, never inside a number

@@ -6,7 +6,6 @@ from __future__ import annotations
 import argparse
 import sys
 
-from tui.cli.fit import add_exact_option
 from tui.cli.support import level_index, node_at, print_json
 
 
@@ -25,7 +24,8 @@ def add_commands(sub: argparse._SubParsersAction) -> None:
     p.add_argument("--start", default="0", metavar="R", help="the first rank (42, 10^12; -1 is the last)")
     p.add_argument("--count", type=int, default=20, metavar="C", help="how many (default 20)")
     p.add_argument("--json", action="store_true", help="one JSON object")
-    add_exact_option(p)
+    p.add_argument("--exact", action="store_true", help="every digit of every number (by default a "
+                   "number too wide for the screen is shortened, with its digit count)")
     p.set_defaults(handler=run)
 
 
@@ -57,7 +57,8 @@ def run(args: argparse.Namespace) -> int:
         print_json(tableaux_document(tower, index, node, total, start, items))
         return 0
     from engine.encodings.drawing import draw_grid
-    from tui.cli.fit import KEEP, FittedOutput
+    from tui.cli.fit import KEEP
+    from tui.cli.folding import FittedOutput
 
     out = FittedOutput(exact=args.exact)  # lines fitted to the width, never broken inside a number
     out.write(f"{total} set-partition tableaux of {tower.format(node)} at level {args.level} of {tower.spec}\n")

@@ -35,7 +35,8 @@ def run(args: argparse.Namespace) -> int:
     if args.json:
         print_json(document)
         return 0
-    from tui.cli.fit import Column, FittedOutput, Table
+    from tui.cli.fit import Column, Table
+    from tui.cli.folding import FittedOutput
 
     out = FittedOutput(exact=args.exact)  # lines fitted to the width, broken only at spaces
     kind = "lazy walk ½(I + P)" if args.lazy else "walk"
