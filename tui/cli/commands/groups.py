@@ -88,7 +88,7 @@ def run_check(args: argparse.Namespace) -> int:
     else:
         irr = ", ".join(f"{x['name']} ({x['dimension']})" for x in report["irreducibles"])
         say(f"{report['file']}: a valid character table of {report['group']}, order {report['order']}, "
-                      f"{report['classes']} classes")
+                      f"{report['classes']}\u00a0classes")  # the count stays with its word
         say(f"irreducibles: {irr}")
         parts = " + ".join(f"{m}·{n}" if m > 1 else n for n, m in report["module"].items())
         say(f"module V: dimension {report['module_dimension']} = {parts}")
