@@ -86,7 +86,7 @@ def run_check(args: argparse.Namespace) -> int:
         say(f"{report['file']}: a valid tensor graph, {report['title']!r}; root {report['root']!r}; "
                       f"{'half levels' if report['half_levels'] else 'whole levels'}")
     else:
-        irr = ", ".join(f"{x['name']} ({x['dimension']})" for x in report["irreducibles"])
+        irr = ", ".join(f"{x['name']}\u00a0({x['dimension']})" for x in report["irreducibles"])  # name and dimension together
         say(f"{report['file']}: a valid character table of {report['group']}, order {report['order']}, "
                       f"{report['classes']}\u00a0classes")  # the count stays with its word
         say(f"irreducibles: {irr}")
