@@ -73,3 +73,15 @@ async def test_s8_picture_at_160x48() -> None:
         drawn = graph_text(app)
         assert "(4,2,1,1) d90" in drawn and "(1,1,1,1,1,1,1,1) d1" in drawn
         assert max(len(line) for line in drawn.splitlines()) <= 160
+
+
+async def test_growth_view_shows_the_half_level_closed_form() -> None:
+    # hand computation (S_3 at level k+1/2: bases fix + 1 = 4, 2, 1; χ_(2,1) = 2, 0, −1 on 1, 3, 2 elements)
+    app = app_on("symmetric:n=4")
+    async with app.run_test(size=(80, 24)) as pilot:
+        await settle(pilot)
+        app.state.node = app.state.tower.parse("(2,1)", 3)  # the selection: (2,1) at level 3/2
+        await pilot.press("w")
+        await settle(pilot)
+        title = str(app.screen.query_one("#growth-title", Static).render())
+        assert "m(k+1/2) = (1/3)·4^k − (1/3)·1^k" in title

@@ -41,6 +41,18 @@ def log10(x: int | Fraction) -> float:
     return big(x.numerator) - big(x.denominator)
 
 
+def _closed_form(tower, label: str) -> str | None:  # noqa: ANN001 - an engine Tower
+    """The node's closed form over eigenvalues as ``series`` prints it, if it has one of at most
+    160 characters (two lines at 80 columns; longer ones: ``towerscope series``)."""
+    from engine.export.finite_documents import series_document
+
+    document = series_document(tower, label)
+    if "closed_form" not in document:
+        return None
+    text = f"{document['closed_form_of']} = {document['closed_form']}"
+    return text if len(text) <= 160 else None
+
+
 class GrowthScreen(Screen[None]):
     DEFAULT_CSS = """
     GrowthScreen #growth-title { height: auto; }
@@ -65,6 +77,7 @@ class GrowthScreen(Screen[None]):
         self.lazy: dict | None = None
         self.problem: str | None = None
         self.picture_drawn = False  # the McKay graph as a picture (else as a list: no room)
+        self.closed_form: str | None = None  # "m(k) = Σ ..." of the node, when short enough to show
 
     def compose(self) -> ComposeResult:
         yield Static(Text("reading the tower…"), id="growth-title")
@@ -82,6 +95,7 @@ class GrowthScreen(Screen[None]):
             self.walk = walk_document(tower, LEVELS)
             self.lazy = walk_document(tower, LEVELS, lazy=True)
             self.growth = growth_document(tower, label or self.walk["nodes"][0], LEVELS)
+            self.closed_form = _closed_form(tower, self.growth["label"])
         except UserError as exc:
             self.problem = str(exc)
         self.action_show(self.mode)
@@ -120,8 +134,9 @@ class GrowthScreen(Screen[None]):
         plt.xlabel("k")
         plt.title(f"{g['label']}: {g['text']}")
         last = g["ratios"][-1]["approximately"] if g["ratios"] else "—"
+        closed = f"\n{self.closed_form}" if self.closed_form else ""
         title.update(Text(f"1 growth  2 walk  3 McKay graph │ {g['label']}: m/leading term at k = "
-                          f"{g['ratios'][-1]['k'] if g['ratios'] else '—'} ≈ {last}"))
+                          f"{g['ratios'][-1]['k'] if g['ratios'] else '—'} ≈ {last}{closed}"))
         plot.refresh()
 
     def _draw_walk(self, plot: PlotextPlot, title: Static) -> None:
