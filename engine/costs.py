@@ -1,7 +1,7 @@
 """What building (and printing) levels will cost, estimated before starting.
 
-The model (constants measured once by ``bench/bench_estimates.py`` on the development machine,
-rounded up):
+The model (constants measured once on the development machine, rounded up;
+``bench/bench_estimates.py`` prints it against real builds, and the counts against real counts):
 
     seconds = E·(t_edge + t_limb·d/9) + X·t_limb + [printed] n·t_text·d²
     bytes   = n·(b_node + b_digit·d)            (the levels kept; one level when streamed)
