@@ -238,6 +238,16 @@ class LevelJump(Capability):
 
 
 @record
+class LevelDimensions(Capability):
+    """The dimensions of a whole built level at once from its multiplicities, where a family's
+    formula is far cheaper that way than node by node: ``of_level(index, nodes, multiplicities)``
+    returns the dimensions in the order of ``nodes`` (the sweep's numbering)."""
+
+    of_level: Callable[[int, Sequence[Node], Sequence[int]], list[int]]
+    title = "dimensions by level"
+
+
+@record
 class CharacterData(Capability):
     """A tower built from a character table: the table, the character of V on its classes, and the
     position of each whole-level node in the table (``engine.class_functions.CharacterTable``)."""

@@ -68,6 +68,35 @@ def general_linear_dimension(n: int, lam: Partition) -> int:
     return _exact(*_cell_product(lam, lambda i, j: n + j - i))
 
 
+def general_linear_dimensions_of_level(n: int, k: int, nodes, multiplicities) -> list[int]:
+    """dim V_λ for the partitions λ of k at level k of V^{⊗k}, V = C^n, given their multiplicities.
+
+    The hook-content formula dim V_λ = Π_cells (n + c)/h (Stanley, *Enumerative Combinatorics 2*,
+    Cor. 7.21.4) with the hook length formula f^λ = k!/Π h (Frame, Robinson and Thrall 1954) gives
+    dim V_λ = f^λ·Π_cells (n + c)/k!; the multiplicity of V_λ in V^{⊗k} is f^λ (Schur–Weyl
+    duality), so with it the hooks are not needed, and the contents of row i are one rising
+    factorial (n − i)(n − i + 1)…(n − i + λ_i − 1), read from a table."""
+    from math import factorial
+
+    rising: list[list[int]] = []
+    for i in range(min(n, k)):
+        row = [1]
+        for j in range(k):
+            row.append(row[-1] * (n - i + j))
+        rising.append(row)
+    whole = factorial(k)
+    out = []
+    for lam, m in zip(nodes, multiplicities):
+        if m == 0 or len(lam) > n or sum(lam) != k:
+            out.append(general_linear_dimension(n, lam))
+            continue
+        content = 1
+        for i, part in enumerate(lam):
+            content *= rising[i][part]
+        out.append(m * content // whole)
+    return out
+
+
 def _el_samra_king(n: int, lam: Partition, row_shift: int, col_shift: int, diagonal_by_rows: bool) -> int:
     """Π (n + r_ij)/h(i,j) with r_ij = λ_i + λ_j − i − j + row_shift above the diagonal and
     r_ij = −λ'_i − λ'_j + i + j + col_shift below it; the diagonal goes with the rows or columns."""

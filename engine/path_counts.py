@@ -207,10 +207,23 @@ class PathCounts:
         dims = space.dims
         if len(dims) < len(values):
             with self.lock:
-                dimension = self.tower.dimension
-                nodes = space.nodes
-                dims.extend([dimension(index, nodes[j]) for j in range(len(dims), len(values))])
+                start, nodes = len(dims), space.nodes
+                by_level = self._by_level
+                if by_level is not None:
+                    dims.extend(by_level.of_level(index, nodes[start:len(values)], values[start:]))
+                else:
+                    dimension = self.tower.dimension
+                    dims.extend([dimension(index, nodes[j]) for j in range(start, len(values))])
         return dims
+
+    @property
+    def _by_level(self):  # noqa: ANN202 - a LevelDimensions capability or None
+        found = self.__dict__.get("_level_dimensions", False)
+        if found is False:
+            from engine.capabilities import LevelDimensions
+
+            found = self.__dict__["_level_dimensions"] = self.tower.capability(LevelDimensions)
+        return found
 
     def dimension_lookup(self, index: int) -> Callable[[Node], int]:
         """node → dimension for the nodes of a built level (from ``dimensions``)."""

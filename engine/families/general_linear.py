@@ -19,10 +19,11 @@ from engine.capabilities import (
     ClosedForm,
     DiagramAlgebra,
     Encodings,
+    LevelDimensions,
     LevelJump,
     SizeGuard,
 )
-from engine.classical_dimensions import general_linear_dimension
+from engine.classical_dimensions import general_linear_dimension, general_linear_dimensions_of_level
 from engine.partition_tower import OneBoxTower, vector_dimension
 from engine.partitions import Partition, partitions_of, standard_tableaux_count
 from engine.specs import Family
@@ -50,7 +51,8 @@ class GeneralLinearTower(OneBoxTower):
     def capabilities(self) -> list[Capability]:
         return [*super().capabilities(),
                 ClosedForm(self.multiplicity, self.on_level, self.estimate_digits, self.formula),
-                LevelJump(self.deep_level, self.estimate_digits)]
+                LevelJump(self.deep_level, self.estimate_digits),
+                LevelDimensions(lambda index, nodes, ms: general_linear_dimensions_of_level(self.n, index, nodes, ms))]
 
     def deep_level(self, index: int) -> dict[Partition, int]:
         """Level k at once: every partition of k with at most N rows, with f^λ (Schur–Weyl duality)."""

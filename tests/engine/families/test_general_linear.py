@@ -165,3 +165,16 @@ def test_deep_closed_form_is_refused_with_its_digit_estimate():
     d = Diagram(parse_spec("general-linear:n=2"))
     with pytest.raises(TooLarge, match=r"5\.57e\+06 digits"):
         d.multiplicity(10**6, (500_000, 500_000))
+
+
+@pytest.mark.parametrize("n", [2, 3, 5, 30])
+def test_dimensions_of_a_built_level_against_weyl_dimension_formula(n):
+    # the sweep's dimensions by level (f^λ·Π(n + c)/k!) against Weyl's dimension formula for type A
+    # (tests/…/weyl_reference.py, written independently), and Σ m·dim = n^k (common practice)
+    d = Diagram(parse_spec(f"general-linear:n={n}"))
+    for k in range(10):
+        level = d.level(k)
+        lookup = d._counts.dimension_lookup(k)
+        for lam in level:
+            assert lookup(lam) == weyl_dimension("A", n, lam)
+        assert d.sums(k).weighted == n**k
