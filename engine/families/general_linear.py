@@ -96,5 +96,5 @@ FAMILY = Family(
     required=("n",),
     rank=30,
     example="general-linear:n=3",
-    capabilities=(SizeGuard, ClosedForm, LevelJump, DiagramAlgebra, Encodings,),
+    capabilities=(SizeGuard, ClosedForm, LevelJump, DiagramAlgebra, Encodings, LevelDimensions),
 )
