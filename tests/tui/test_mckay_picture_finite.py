@@ -85,3 +85,19 @@ async def test_growth_view_shows_the_half_level_closed_form() -> None:
         await settle(pilot)
         title = str(app.screen.query_one("#growth-title", Static).render())
         assert "m(k+1/2) = (1/3)·4^k − (1/3)·1^k" in title
+
+
+async def test_graph_key_before_the_documents_and_without_steps() -> None:
+    # the graph needs no walk: asked for at once it is drawn; a family without finite steps says so
+    app = app_on("su2:kind=tetrahedral")
+    async with app.run_test(size=(80, 24)) as pilot:
+        await settle(pilot)
+        await pilot.press("w", "3")
+        await settle(pilot)
+        assert app.screen.picture_drawn and "o:3 d3" in graph_text(app)
+    app = app_on("general-linear:n=3")
+    async with app.run_test(size=(80, 24)) as pilot:
+        await settle(pilot)
+        await pilot.press("w", "3")
+        await settle(pilot)
+        assert "no finite step matrix" in str(app.screen.query_one("#growth-title", Static).render())

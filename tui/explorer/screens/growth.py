@@ -13,8 +13,10 @@ from typing import TYPE_CHECKING
 
 from rich.text import Text
 from textual.app import ComposeResult
+from textual import work
 from textual.binding import Binding
 from textual.containers import VerticalScroll
+from textual.message import Message
 from textual.screen import Screen
 from textual.widgets import Footer, Static
 from textual_plotext import PlotextPlot
@@ -86,22 +88,53 @@ class GrowthScreen(Screen[None]):
             yield Static("", id="growth-graph-text")
         yield Footer(compact=True, show_command_palette=False)
 
+    class Ready(Message):
+        """The engine's documents for the view, computed off the UI thread."""
+
+        def __init__(self, documents: dict) -> None:
+            super().__init__()
+            self.documents = documents
+
     def on_mount(self) -> None:
+        self.query_one("#growth-plot", PlotextPlot).display = False
+        self.query_one("#growth-graph", VerticalScroll).display = False
+        self._compute()
+
+    @work(thread=True, exclusive=True, group="growth", exit_on_error=False)
+    def _compute(self) -> None:
+        """The walk, lazy walk, growth and closed form (the first character tower with irrational
+        values also loads sympy, seconds): in a thread, so keys still answer."""
         from engine.export.finite_documents import growth_document, walk_document
 
         tower = self.state.tower
         label = tower.format(self.state.node) if self.state.node is not None else None
+        documents: dict = {}
         try:
-            self.walk = walk_document(tower, LEVELS)
-            self.lazy = walk_document(tower, LEVELS, lazy=True)
-            self.growth = growth_document(tower, label or self.walk["nodes"][0], LEVELS)
-            self.closed_form = _closed_form(tower, self.growth["label"])
+            documents["walk"] = walk_document(tower, LEVELS)
+            documents["lazy"] = walk_document(tower, LEVELS, lazy=True)
+            documents["growth"] = growth_document(tower, label or documents["walk"]["nodes"][0], LEVELS)
+            documents["closed_form"] = _closed_form(tower, documents["growth"]["label"])
         except UserError as exc:
-            self.problem = str(exc)
+            documents = {"problem": str(exc)}
+        except Exception as exc:  # noqa: BLE001 - a failure is said on the screen, not left as "reading"
+            documents = {"problem": f"the view could not be computed: {type(exc).__name__}: {str(exc)[:200]}"}
+        self.post_message(self.Ready(documents))
+
+    def on_growth_screen_ready(self, message: "GrowthScreen.Ready") -> None:
+        d = message.documents
+        self.problem = d.get("problem")
+        self.walk, self.lazy, self.growth = d.get("walk"), d.get("lazy"), d.get("growth")
+        self.closed_form = d.get("closed_form")
         self.action_show(self.mode)
 
     def action_show(self, mode: str) -> None:
         self.mode = mode
+        if self.problem is None and self.growth is None and mode != "graph":
+            # still reading: shown when Ready arrives, in the mode asked last (the graph needs none)
+            self.query_one("#growth-title", Static).update(Text("reading the tower…"))
+            self.query_one("#growth-plot", PlotextPlot).display = False
+            self.query_one("#growth-graph", VerticalScroll).display = False
+            return
         plot = self.query_one("#growth-plot", PlotextPlot)
         graph = self.query_one("#growth-graph", VerticalScroll)
         title = self.query_one("#growth-title", Static)
@@ -164,7 +197,11 @@ class GrowthScreen(Screen[None]):
         from engine.series.finite import finite_view
         from tui.explorer.widgets.mckay_picture import picture_text
 
-        view = finite_view(self.state.tower, "the McKay graph")
+        try:
+            view = finite_view(self.state.tower, "the McKay graph")
+        except UserError as exc:
+            title.update(Text(str(exc)))
+            return
         graph = self.query_one("#growth-graph", VerticalScroll)
         width, height = graph.size.width - 1, graph.size.height
         if width < 10 or height < 3:  # not laid out yet: drawn again on the next resize
