@@ -52,6 +52,7 @@ class Track:
 class Band:
     tracks: list[Track] = field(default_factory=list)
     straight: list[Edge] = field(default_factory=list)  # a above, b below (or reversed), same port
+    edges: list[Edge] = field(default_factory=list)  # every edge in the band, before routing
 
     @property
     def height(self) -> int:
@@ -223,8 +224,8 @@ def _crossings(band: Band, port: dict[int, int], order: list[Track]) -> int:
 
 
 def _route(band: Band, upper: set[int], port: dict[int, int], labelled: set[Edge]) -> None:
-    """Fans, single tracks and their order for the edges in ``band.tracks[0].edges`` (all of them)."""
-    edges = band.tracks.pop().edges if band.tracks else []
+    """Fans, single tracks and straight lines for ``band.edges``, the tracks in their order."""
+    edges = band.edges
     ups: dict[int, list[Edge]] = {}
     downs: dict[int, list[Edge]] = {}
     for e in edges:
@@ -273,9 +274,7 @@ def lay_out(layers: list[list[int]], edges: list[Edge], texts: dict[int, str], l
     up_count: dict[tuple[int, int], int] = {}
     for e in edges:
         band = min(layer_of[e.a], layer_of[e.b])
-        if not bands[band].tracks:
-            bands[band].tracks.append(Track([], [], []))
-        bands[band].tracks[0].edges.append(e)
+        bands[band].edges.append(e)
         for end in (e.a, e.b):
             up_count[(band, end)] = up_count.get((band, end), 0) + 1
     widths = {i: len(t) for i, t in texts.items()}
