@@ -380,6 +380,10 @@ class Diagram:
             self._reverse[index] = reverse
         return list(reverse.get(node, []))
 
+    def cached_sums(self, index: int) -> LevelSums | None:
+        """``sums(index)`` if it was computed already, else None (never computes)."""
+        return self._sums.get(index)
+
     def sums(self, index: int, progress: Progress | None = None, cancel: CancelToken | None = None) -> LevelSums:
         found = self._sums.get(index)
         if found is not None:

@@ -74,11 +74,10 @@ class Building:
                 node = data.nodes[0] if data.nodes else None
             if index > 0 and node is not None and not data.jumped:
                 diagram.parents(index, node)  # warms the reverse edges for families without parents()
-            if data.jumped:  # show the level now; its sums (of numbers of any size) follow
-                post(LevelsReady(request, index, node, data, None))
+            known = None if data.jumped else diagram.cached_sums(index)
+            post(LevelsReady(request, index, node, data, known))
+            if known is None:  # show the level now; its sums (dimensions of every node) follow
                 post(SumsReady(request, index, vm.level_sums(diagram, data)))
-            else:
-                post(LevelsReady(request, index, node, data, vm.level_sums(diagram, data)))
         except Cancelled:
             post(BuildFailed(request, "stopped", cancelled=True))
         except UserError as exc:
