@@ -253,3 +253,14 @@ class OneBoxTower(Tower):
     def sort_key(self, node: Partition, index: int = 0) -> tuple[int, ...]:
         """Smaller partitions first; within one size, (k) first (reverse lexicographic)."""
         return (sum(node),) + tuple(-x for x in node)
+
+    def sort_nodes(self, nodes, index: int) -> list[Partition]:
+        """``sort_key``'s order without a key function: by size, then plain tuple order reversed
+        (several times faster on a level of 200,000 partitions)."""
+        by_size: dict[int, list[Partition]] = {}
+        for node in nodes:
+            by_size.setdefault(sum(node), []).append(node)
+        out: list[Partition] = []
+        for size in sorted(by_size):
+            out.extend(sorted(by_size[size], reverse=True))
+        return out

@@ -25,7 +25,7 @@ from engine.capabilities import (
 )
 from engine.classical_dimensions import general_linear_dimension, general_linear_dimensions_of_level
 from engine.partition_tower import OneBoxTower, vector_dimension
-from engine.partitions import Partition, partitions_of, standard_tableaux_count
+from engine.partitions import Partition, larger_by_one_box, partitions_of, standard_tableaux_count
 from engine.specs import Family
 class GeneralLinearTower(OneBoxTower):
     family = "general-linear"
@@ -39,6 +39,13 @@ class GeneralLinearTower(OneBoxTower):
 
     def admissible_text(self) -> str:
         return f"at most {self.n} rows"
+
+    def children(self, index: int, node: Partition) -> list[tuple[Partition, int]]:
+        """Add a box at each addable corner (Pieri); only a new row can break "at most N rows"."""
+        kids = larger_by_one_box(node)
+        if len(node) >= self.n:
+            kids.pop()  # the last one is the new row
+        return [(lam, 1) for lam in kids]
 
     def level_kind(self, index: int) -> str:
         return f"GL_{self.n}"

@@ -76,6 +76,8 @@ def test_protocol(spec):
         assert sums.consistent, (spec, index)
         if dim_v is not None and tower.max_index is None:  # a finite (mixed) word is not one repeated V
             assert sums.weighted == dim_v ** (index // tower.steps_per_unit)
+        # a family's fast display order is its sort_key's order (common practice: one order)
+        assert tower.sort_nodes(list(level), index) == sorted(level, key=lambda v: tower.sort_key(v, index))
         for node, m in level.items():
             assert tower.parse(tower.format(node), index) == node
             assert tower.dimension(index, node) > 0

@@ -94,7 +94,7 @@ class ExplorerApp(Building, Dialogs, App[None]):
         self._last_key = time.monotonic()
 
     def _collect_when_idle(self) -> None:
-        if time.monotonic() - self._last_key > 1.0 and gc.get_count()[1] > 0:
+        if self._pending is None and time.monotonic() - self._last_key > 1.0 and gc.get_count()[1] > 0:
             gc.collect()
 
     def show_notices(self) -> None:
@@ -111,6 +111,13 @@ class ExplorerApp(Building, Dialogs, App[None]):
     def _build_progress(self, message: BuildProgress) -> None:
         wanted = self._pending is not None and (message.request == self._request or message.index == self._pending)
         if wanted and self._drawable():
+            # at most a few repaints a second: each one lays the screen out again, and on a deep
+            # level that main-thread work slows the build itself (it holds the GIL)
+            now = time.monotonic()
+            last_at, last_index = getattr(self, "_progress_shown", (0.0, None))
+            if now - last_at < 0.25 and last_index == message.index:
+                return
+            self._progress_shown = (now, message.index)
             level = format_level(self.state.tower.level_of(message.index))
             self.main.show_progress(message.done, message.total, f"building level {level}… Esc stops")
 

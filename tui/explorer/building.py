@@ -12,6 +12,7 @@ the jump, and so do its neighbours, without building the levels below.
 from __future__ import annotations
 
 import threading
+import time
 from typing import TYPE_CHECKING, Any
 
 from textual import work
@@ -25,6 +26,20 @@ from tui.explorer.messages import BuildFailed, BuildProgress, LevelsReady, SideR
 
 if TYPE_CHECKING:
     from tui.explorer.view_model import LevelData
+
+
+def _every_so_often(report, interval: float = 0.2):  # noqa: ANN001, ANN202 - a progress callback
+    """``report`` at most every ``interval`` seconds: each message wakes the UI thread, whose work
+    holds the GIL that the build needs (hundreds of reports a deep level otherwise)."""
+    last = [0.0]
+
+    def progress(done: float, total: float) -> None:
+        now = time.monotonic()
+        if now - last[0] >= interval or done >= total:
+            last[0] = now
+            report(done, total)
+
+    return progress
 
 
 class Building:
@@ -49,8 +64,11 @@ class Building:
         self._request += 1
         self._pending = index
         diagram = self.state.diagram  # type: ignore[attr-defined]
-        if index not in self.shown and vm.by_jump(diagram, index):
-            self.stop_side()  # a jump: the asked level alone first; its LevelsReady plans the side panes
+        if index not in self.shown and (index > diagram.built or vm.by_jump(diagram, index)):
+            # the asked level alone first (its LevelsReady plans the side panes), unless the side
+            # worker is building that very level
+            if self._side_current != index:
+                self.stop_side()
         else:
             self.plan_around(index)
         self._build(self._request, diagram, index, node, toward, self.shown.get(index))
@@ -63,7 +81,7 @@ class Building:
         try:
             if data is None:
                 if not vm.by_jump(diagram, index):
-                    diagram.ensure(index, lambda done, total: post(BuildProgress(request, done, total, index)), cancel)
+                    diagram.ensure(index, _every_so_often(lambda d, t: post(BuildProgress(request, d, t, index))), cancel)
                 data = vm.level_data(diagram, index)
             level = data.multiplicity
             if node is None and toward is not None:
@@ -136,7 +154,7 @@ class Building:
             diagram, index, cancel = step
             try:
                 if not vm.by_jump(diagram, index):
-                    diagram.ensure(index, lambda d, t: post(BuildProgress(-1, d, t, index)), cancel)
+                    diagram.ensure(index, _every_so_often(lambda d, t: post(BuildProgress(-1, d, t, index))), cancel)
                 data = vm.level_data(diagram, index)
             except Cancelled:
                 continue

@@ -85,7 +85,11 @@ def level_data(diagram: Diagram, index: int) -> LevelData:
     else:
         level, nodes = diagram.level(index), diagram.nodes(index)
     fmt = tower.format
-    label_width = max((cell_len(fmt(v)) for v in nodes), default=1)
+    labels = list(map(fmt, nodes))
+    if "".join(labels).isascii():  # one cell a character: no per-label cell count needed
+        label_width = max(map(len, labels), default=1)
+    else:
+        label_width = max(map(cell_len, labels), default=1)
     m_width = len(short_int(max(level.values(), default=0), 11 if len(nodes) <= EXACT_COLUMNS_UP_TO else 8))
     if len(nodes) <= EXACT_COLUMNS_UP_TO:
         d_width = max((len(short_int(tower.dimension(index, v), 7)) for v in nodes), default=1)
