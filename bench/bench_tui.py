@@ -139,11 +139,11 @@ async def steps_at_depth(spec: str, level: int, steps: int) -> None:
         while app.state.index != level:
             await asyncio.sleep(0.01)
         print(f"{spec}: level {level} shown {time.perf_counter() - start:.1f} s after the jump key   target < 15 s")
-        while app.state.diagram.built < level + 2:  # the side panes' levels, built in the background
+        while not set(app.main.wanted_levels()) <= set(app.shown):  # the side panes' levels, built in the background
             await asyncio.sleep(0.05)
         print(f"  side panes' levels ready {time.perf_counter() - start:.1f} s after it")
         for n in range(steps):
-            while app.state.diagram.built < app.state.index + 1:
+            while not set(app.main.wanted_levels()) <= set(app.shown):
                 await asyncio.sleep(0.05)
             target = app.state.index + 1
             t0 = time.perf_counter()
