@@ -18,6 +18,7 @@ of S_N, O(N), finite towers) only learns the nodes that are new.
 from __future__ import annotations
 
 import threading
+import time
 from itertools import compress, repeat
 from operator import mul
 from typing import Callable, Hashable
@@ -30,6 +31,8 @@ from engine.tower import Node, Tower
 REPEAT_UP_TO = 16
 #: nodes pulled between two looks at the cancel token
 CHUNK = 1 << 15
+#: nodes learned under one hold of the lock
+LEARN_CHUNK = 2048
 
 
 class Space:
@@ -55,7 +58,7 @@ class Space:
 class Passage:
     """One step kind from a source space to a target space, with its edges both ways."""
 
-    __slots__ = ("source", "target", "kids", "counts", "parents", "weighted", "upto")
+    __slots__ = ("source", "target", "kids", "counts", "parents", "weighted", "upto", "pulls")
 
     def __init__(self, source: Space, target: Space) -> None:
         self.source = source
@@ -65,11 +68,13 @@ class Passage:
         #: by target number: the source numbers stepping to it (repeated by small edge counts);
         #: tuples, which the garbage collector stops tracking (lists would make every collection
         #: walk them all)
-        self.parents: list[tuple[int, ...]] = []
+        self.parents: list[tuple[int, ...]] | None = []
         #: target number → [(source number, edge count)] for counts above REPEAT_UP_TO
         self.weighted: dict[int, list[tuple[int, int]]] = {}
         #: every source number below this has its children learned
         self.upto = 0
+        #: levels pulled through this passage (after the first, it keeps its parents)
+        self.pulls = 0
 
 
 class PathCounts:
@@ -102,14 +107,15 @@ class PathCounts:
 
     # ----- edges ----------------------------------------------------------------------------
     def _learn(self, index: int, passage: Passage, ident: int) -> None:
-        """Ask the tower for the children of one source node; register the edges both ways."""
+        """Ask the tower for the children of one source node; register the edges both ways (the
+        parents side only while the passage keeps it, see ``_parents_again``)."""
         kids = passage.kids
         if ident in kids:
             return
         pairs = self.tower.children(index, passage.source.nodes[ident])
         target = passage.target
         ids, nodes, parents = target.ids, target.nodes, passage.parents
-        if len(parents) < len(nodes):
+        if parents is not None and len(parents) < len(nodes):
             parents.extend([()] * (len(nodes) - len(parents)))
         found: list[int] = []
         counts: list[int] | None = None
@@ -118,32 +124,61 @@ class PathCounts:
             if c is None:
                 c = ids[child] = len(nodes)
                 nodes.append(child)
-                parents.append(())
+                if parents is not None:
+                    parents.append(())
             found.append(c)
-            if e == 1:
-                parents[c] += (ident,)
-            else:
-                if counts is None:
-                    counts = [1] * (len(found) - 1)
-                if e <= REPEAT_UP_TO:
+            if e != 1 and counts is None:
+                counts = [1] * (len(found) - 1)
+            if counts is not None:
+                counts.append(e)
+            if parents is not None:
+                if e == 1:
+                    parents[c] += (ident,)
+                elif e <= REPEAT_UP_TO:
                     parents[c] += (ident,) * e
                 else:
                     passage.weighted.setdefault(c, []).append((ident, e))
-            if counts is not None:
-                counts.append(e)
         if counts is not None:
             passage.counts[ident] = tuple(counts)
         kids[ident] = tuple(found)
 
+    @staticmethod
+    def _parents_again(passage: Passage) -> None:
+        """The parents side of a passage from its children side.  A passage's first pull drops
+        its parents (on towers whose every level is a space of its own, as GL_N's, it is never
+        pulled again, and the parents are a quarter of the memory); a second pull rebuilds them
+        here, once, and keeps them from then on."""
+        parents: list[tuple[int, ...]] = [()] * len(passage.target.nodes)
+        weighted: dict[int, list[tuple[int, int]]] = {}
+        every = passage.counts
+        for ident, found in passage.kids.items():
+            counts = every.get(ident)
+            if counts is None:
+                for c in found:
+                    parents[c] += (ident,)
+            else:
+                for c, e in zip(found, counts):
+                    if e <= REPEAT_UP_TO:
+                        parents[c] += (ident,) * e
+                    else:
+                        weighted.setdefault(c, []).append((ident, e))
+        passage.parents, passage.weighted = parents, weighted
+
     def edges(self, index: int, node: Node) -> list[tuple[Node, int]]:
         """The children of ``node`` at ``index`` with edge counts (learned once per passage)."""
-        with self.lock:
-            passage = self.passage(index)
-            ident = passage.source.number(node)
-            self._learn(index, passage, ident)
-            kids, counts = passage.kids[ident], passage.counts.get(ident)
-            nodes = passage.target.nodes
-            return [(nodes[k], 1 if counts is None else counts[n]) for n, k in enumerate(kids)]
+        passage = self.passage(index)
+        ident = passage.source.ids.get(node)
+        kids = None if ident is None else passage.kids.get(ident)
+        if kids is None:  # not learned yet: numbering and learning under the lock
+            with self.lock:
+                ident = passage.source.number(node)
+                self._learn(index, passage, ident)
+                kids = passage.kids[ident]
+        # learned nodes are only read (their lists never change): no lock, so that a build running
+        # in another thread does not hold up the screen
+        counts = passage.counts.get(ident)
+        nodes = passage.target.nodes
+        return [(nodes[k], 1 if counts is None else counts[n]) for n, k in enumerate(kids)]
 
     # ----- the sweep ------------------------------------------------------------------------
     def build_next(self, progress: Callable[[float], None] | None = None, cancel=None) -> None:
@@ -152,19 +187,25 @@ class PathCounts:
         source_space, previous = self.levels[index]
         passage = self.passage(index)
         learn = self._learn
+        # learn the nodes of the level not learned yet (nodes of the space that are not on the
+        # level, value 0, are left alone: their children may lie far from the level), a chunk at
+        # a time under the lock, so that another thread asking for edges waits a chunk at most
+        kids = passage.kids
         with self.lock:
-            # learn the nodes of the level not learned yet (nodes of the space that are not on
-            # the level, value 0, are left alone: their children may lie far from the level)
-            kids = passage.kids
-            start = passage.upto
-            new = [j for j in compress(range(start, len(previous)), previous[start:]) if j not in kids]
-            for count, ident in enumerate(new, 1):
-                learn(index, passage, ident)
-                if count % 2048 == 0:
-                    if cancel is not None and cancel.is_set():
-                        raise Cancelled()
-                    if progress is not None:
-                        progress(0.5 * count / len(new))
+            if passage.parents is None:
+                self._parents_again(passage)
+        start = passage.upto
+        new = [j for j in compress(range(start, len(previous)), previous[start:]) if j not in kids]
+        for first in range(0, len(new), LEARN_CHUNK):
+            with self.lock:
+                for ident in new[first:first + LEARN_CHUNK]:
+                    learn(index, passage, ident)
+            time.sleep(0)  # let a thread waiting for the lock take it (locks are not fair)
+            if cancel is not None and cancel.is_set():
+                raise Cancelled()
+            if progress is not None:
+                progress(0.5 * min(first + LEARN_CHUNK, len(new)) / len(new))
+        with self.lock:
             while passage.upto in kids:
                 passage.upto += 1
             parents = passage.parents
@@ -189,6 +230,10 @@ class PathCounts:
         if cancel is not None and cancel.is_set():
             raise Cancelled()
         self.levels.append((passage.target, values))
+        passage.pulls += 1
+        if passage.pulls == 1:
+            with self.lock:
+                passage.parents, passage.weighted = None, {}
 
     # ----- reading --------------------------------------------------------------------------
     def multiplicity(self, index: int, node: Node) -> int:
@@ -205,15 +250,20 @@ class PathCounts:
         """The dimensions of the level's space, by number, computed once per node of a space."""
         space, values = self.levels[index]
         dims = space.dims
-        if len(dims) < len(values):
+        start = len(dims)
+        if start < len(values):
+            # computed outside the lock (seconds on a deep level; edges asked meanwhile must not
+            # wait), added under it unless another thread added them first
+            nodes = space.nodes[start:len(values)]
+            by_level = self._by_level
+            if by_level is not None:
+                found = by_level.of_level(index, nodes, values[start:])
+            else:
+                dimension = self.tower.dimension
+                found = [dimension(index, node) for node in nodes]
             with self.lock:
-                start, nodes = len(dims), space.nodes
-                by_level = self._by_level
-                if by_level is not None:
-                    dims.extend(by_level.of_level(index, nodes[start:len(values)], values[start:]))
-                else:
-                    dimension = self.tower.dimension
-                    dims.extend([dimension(index, nodes[j]) for j in range(start, len(values))])
+                if len(dims) == start:
+                    dims.extend(found)
         return dims
 
     @property

@@ -189,7 +189,8 @@ class ExplorerApp(Building, Dialogs, App[None]):
             return
         self._search(diagram, index)
 
-    @work(thread=True, exclusive=True, group="faithful", exit_on_error=False)
+    @work(thread=True, exclusive=True, group="faithful", exit_on_error=False,
+          description="the first level where the algebra stops acting faithfully")
     def _search(self, diagram: Diagram, upto: int) -> None:
         """The family's theorem where it has one (no level built), else a search of built levels."""
         try:

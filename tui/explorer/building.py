@@ -73,7 +73,8 @@ class Building:
             self.plan_around(index)
         self._build(self._request, diagram, index, node, toward, self.shown.get(index))
 
-    @work(thread=True, exclusive=True, group="build", exit_on_error=False)
+    # a description of our own: else Textual reprs every argument (a deep level's data: seconds)
+    @work(thread=True, exclusive=True, group="build", exit_on_error=False, description="the asked level")
     def _build(self, request: int, diagram: Diagram, index: int, node: Node | None,
                toward: tuple[int, Node] | None, data: "LevelData | None") -> None:
         cancel = get_current_worker().cancelled_event
@@ -144,7 +145,7 @@ class Building:
             self._side_running = False
             return None
 
-    @work(thread=True, group="side", exit_on_error=False)
+    @work(thread=True, group="side", exit_on_error=False, description="the side panes' levels")
     def _side(self) -> None:
         post = self.post_message  # type: ignore[attr-defined]
         while True:

@@ -289,15 +289,15 @@ class AlgebraView(ModalScreen[None]):
         if not worker.is_cancelled:
             self.post_message(self.Finished(attribute, text))
 
-    @work(thread=True, exclusive=True, group="algebra", exit_on_error=False)
+    @work(thread=True, exclusive=True, group="algebra", exit_on_error=False, description="algebra")
     def _rank_worker(self) -> None:
         self._run("rank_text", lambda cancel: rank_text(self.diagram, self.index, self._progress, cancel))
 
-    @work(thread=True, exclusive=True, group="algebra", exit_on_error=False)
+    @work(thread=True, exclusive=True, group="algebra", exit_on_error=False, description="algebra")
     def _kernel_worker(self) -> None:
         self._run("kernel_text", lambda cancel: kernel_text(self.diagram, self.index, self._width(), cancel))
 
-    @work(thread=True, exclusive=True, group="algebra", exit_on_error=False)
+    @work(thread=True, exclusive=True, group="algebra", exit_on_error=False, description="algebra")
     def _cells_worker(self) -> None:
         self._run("cells_text", lambda cancel: cells_text(self.diagram, self.index, self.node, self._progress, cancel))
 

@@ -100,7 +100,7 @@ class GrowthScreen(Screen[None]):
         self.query_one("#growth-graph", VerticalScroll).display = False
         self._compute()
 
-    @work(thread=True, exclusive=True, group="growth", exit_on_error=False)
+    @work(thread=True, exclusive=True, group="growth", exit_on_error=False, description="growth documents")
     def _compute(self) -> None:
         """The walk, lazy walk, growth and closed form (the first character tower with irrational
         values also loads sympy, seconds): in a thread, so keys still answer."""

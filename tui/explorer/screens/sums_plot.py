@@ -51,7 +51,7 @@ class SumsPlotScreen(Screen[None]):
     def on_mount(self) -> None:
         self._collect()
 
-    @work(thread=True, exclusive=True, exit_on_error=False)
+    @work(thread=True, exclusive=True, exit_on_error=False, description="level sums")
     def _collect(self) -> None:
         state = self.state
         diagram, tower = state.diagram, state.tower
