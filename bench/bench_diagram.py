@@ -73,6 +73,9 @@ def sweep():
     return counts
 
 learned = sweep()
+for i in range(upto):  # a passage pulled once has dropped its parents: rebuild them for the pull
+    if learned.passage(i).parents is None:
+        PathCounts._parents_again(learned.passage(i))
 plan = [(learned.passage(i).parents, len(learned.levels[i + 1][1]), len(learned.levels[i][0].nodes)) for i in range(upto)]
 def pull():
     # the engine's pull alone, over its own learned passages (build_next without the learning)

@@ -3,7 +3,14 @@ contract (shared guide cli-contract.md); the JSON and CSV writers and the CLI pr
 
 from __future__ import annotations
 
+import os
+from json.encoder import py_encode_basestring as _py_quote
 from typing import Any, Iterator, TextIO
+
+try:  # the C quoting json.dumps uses with ensure_ascii=False
+    from _json import encode_basestring as encode_basestring
+except ImportError:  # pragma: no cover - CPython always has _json
+    encode_basestring = _py_quote
 
 from engine.diagram import CancelToken, Diagram, Progress
 from engine.export import json_text
@@ -12,19 +19,37 @@ from engine.levels import format_level, level_to_json
 from engine.tower import Node
 
 
-def node_values(diagram: Diagram, index: int, level: dict[Node, int]) -> Iterator[tuple[str, int, int]]:
+def node_values(diagram: Diagram, index: int, level: dict[Node, int],
+                labels: tuple[dict[Node, str], dict[Node, str]] | None = None) -> Iterator[tuple[str, int, int]]:
     """(label, multiplicity, dimension) of every node of a level, in display order (nothing is
-    kept: a streamed document holds one level at a time)."""
-    tower = diagram.tower
-    label = tower.format
+    kept: a streamed document holds one level at a time).  ``labels``: (the labels of the last
+    level of the same node space, the labels of this level, filled here), for a writer whose
+    levels share nodes, as S_N's do."""
+    format_node = diagram.tower.format
     dimension = diagram.dimension_lookup(index)
-    for node in diagram.sorted_nodes(index, level):
-        yield label(node), level[node], dimension(node)
+    nodes = diagram.sorted_nodes(index, level)
+    if labels is None:
+        names = map(format_node, nodes)
+    else:
+        before, now = labels
+
+        def name(node: Node) -> str:
+            found = before.get(node)
+            if found is None:
+                found = format_node(node)
+            now[node] = found
+            return found
+
+        names = map(name, nodes)
+    return zip(names, map(level.__getitem__, nodes), map(dimension, nodes))
 
 
-def level_entry(diagram: Diagram, index: int, level: dict[Node, int]) -> dict[str, Any]:
-    """One level of ``levels --json``: its nodes, sums and (where the family knows it) its algebra."""
-    nodes = [{"label": label, "multiplicity": m, "dimension": dim} for label, m, dim in node_values(diagram, index, level)]
+def level_entry(diagram: Diagram, index: int, level: dict[Node, int], nodes: Any = None) -> dict[str, Any]:
+    """One level of ``levels --json``: its nodes, sums and (where the family knows it) its algebra
+    (``nodes``: put in place of the list of nodes, for the streamed writer)."""
+    if nodes is None:
+        nodes = [{"label": label, "multiplicity": m, "dimension": dim}
+                 for label, m, dim in node_values(diagram, index, level)]
     sums = diagram.sums_of(index, level)
     entry: dict[str, Any] = {
         "level": level_to_json(diagram.tower.level_of(index)),
@@ -84,8 +109,15 @@ def write_levels_json(
         last = '"first_unfaithful": '
     stream.write(head)
     first = True
-    for entry in level_entries(diagram, start, upto, progress, cancel):
-        text = dumps(entry)
+    token = os.urandom(8).hex()
+    labels: dict[Any, dict[Node, str]] = {}  # by node space: the last level's labels only
+    for index, level in diagram.levels_between(start, upto, progress, cancel):
+        space = diagram.tower.space_key(index)
+        now: dict[Node, str] = {}
+        # the nodes, the bulk of the text, written by a template; the rest by json_text
+        text = dumps(level_entry(diagram, index, level, token)).replace(
+            f'"{token}"', nodes_text(node_values(diagram, index, level, (labels.get(space, {}), now)), indent), 1)
+        labels[space] = now
         if shift and indent is not None:
             text = text.replace("\n", shift)
         stream.write(text if first else between + text)
@@ -95,12 +127,32 @@ def write_levels_json(
     stream.write(tail + last + dumps(first_unfaithful_json(diagram)) + ("}" if indent is None else "\n}"))
 
 
+def nodes_text(values: Iterator[tuple[str, int, int]], indent: int | None) -> str:
+    """The list of nodes of a level entry (at depth 0) as ``json.dumps(..., ensure_ascii=False,
+    indent=indent)`` writes it, one template per node instead of the generic encoder."""
+    values = list(values)
+    quote = encode_basestring
+    small = 1 << json_text.BIG_BITS
+    number = str if all(m < small and d < small for _, m, d in values) else json_text.number_text
+    if indent is None:
+        items = [f'{{"label": {quote(a)}, "multiplicity": {number(m)}, "dimension": {number(d)}}}'
+                 for a, m, d in values]
+        return "[" + ", ".join(items) + "]"
+    p2, p3 = " " * (2 * indent), " " * (3 * indent)
+    items = [f'{p2}{{\n{p3}"label": {quote(a)},\n{p3}"multiplicity": {number(m)},\n{p3}"dimension": {number(d)}\n{p2}}}'
+             for a, m, d in values]
+    return "[\n" + ",\n".join(items) + "\n" + " " * indent + "]" if items else "[]"
+
+
 def level_rows(diagram: Diagram, upto: int, start: int = 0) -> Iterator[tuple[str, str, int, int]]:
     """(level, label, multiplicity, dimension) for every node of levels start..upto."""
+    labels: dict[Any, dict[Node, str]] = {}  # by node space: the last level's labels only
     for index, level in diagram.levels_between(start, upto):
         shown = format_level(diagram.tower.level_of(index))
-        for label, m, dim in node_values(diagram, index, level):
+        space, now = diagram.tower.space_key(index), {}
+        for label, m, dim in node_values(diagram, index, level, (labels.get(space, {}), now)):
             yield shown, label, m, dim
+        labels[space] = now
 
 
 def require_node(diagram: Diagram, index: int, node: Node, text: str) -> int:

@@ -13,7 +13,16 @@ import os
 from typing import Any
 
 #: ints with at least this many bits are written by flint
-_BIG_BITS = 3000
+BIG_BITS = 3000
+
+
+def number_text(x: int) -> str:
+    """An int as JSON writes it, large ones by flint."""
+    if x.bit_length() < BIG_BITS:
+        return str(x)
+    from flint import fmpz
+
+    return str(fmpz(x))
 
 
 def dumps(value: Any, indent: int | None = None) -> str:
@@ -23,7 +32,7 @@ def dumps(value: Any, indent: int | None = None) -> str:
 
     def swap(x: Any) -> Any:
         if type(x) is int:
-            if x.bit_length() >= _BIG_BITS:
+            if x.bit_length() >= BIG_BITS:
                 found.append(x)
                 return f"{token}:{len(found) - 1}"
             return x

@@ -36,9 +36,8 @@ async def _type_into_dialog(pilot, key: str, text: str) -> None:
             break
         await pilot.press("tab")
         await settle(pilot)
-    for _ in range(2):
-        await pilot.press("escape")
-        await settle(pilot)
+    await pilot.press("escape", "escape")
+    await settle(pilot)
 
 
 @pytest.mark.parametrize("key", DIALOG_KEYS)
