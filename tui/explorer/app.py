@@ -148,7 +148,7 @@ class ExplorerApp(Building, Dialogs, App[None]):
     @on(SideReady)
     def _side_ready(self, message: SideReady) -> None:
         data = message.data
-        if self._drawable() and data.index in self.main.wanted_levels():
+        if self._drawable() and (data.index in self.main.wanted_levels() or data.index == self.state.index - 1):
             self.shown[data.index] = data
             self.main.redraw_panes()
             if abs(data.index - self.state.index) == 1:

@@ -108,7 +108,9 @@ class Building:
     def plan_around(self, index: int) -> None:
         """Plan the side panes' levels for the current layout around ``index``; drop the others."""
         diagram = self.state.diagram  # type: ignore[attr-defined]
-        wanted = vm.span(diagram, index, self.main.pane_count_for(index))  # type: ignore[attr-defined]
+        wanted = list(vm.span(diagram, index, self.main.pane_count_for(index)))  # type: ignore[attr-defined]
+        if index > 0 and index - 1 > diagram.built and index - 1 not in wanted:
+            wanted.append(index - 1)  # a jumped level's parents (the details) need the level before it
         with self._side_lock:
             for i in [i for i in self.shown if i not in wanted and i != index]:
                 del self.shown[i]

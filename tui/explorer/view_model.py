@@ -220,6 +220,10 @@ def pane_marks(state: ExplorerState, index: int, cursor: int | None,
     )
 
 
+def _formatted(fmt, edges: list[tuple[Node, int]] | None) -> list[tuple[str, int]] | None:  # noqa: ANN001
+    return None if edges is None else [(fmt(n), e) for n, e in edges]
+
+
 def node_details(state: ExplorerState, data: LevelData | None,
                  shown: dict[int, LevelData] | None = None) -> NodeDetails | None:
     diagram, index, node = state.diagram, state.index, state.node
@@ -235,7 +239,7 @@ def node_details(state: ExplorerState, data: LevelData | None,
         kind=tower.level_kind(index),
         dimension=tower.dimension(index, node),
         multiplicity=data.multiplicity.get(node, 0),
-        parents=[(fmt(p), e) for p, e in (parents_shown(state, shown or {}) or [])],
+        parents=_formatted(fmt, parents_shown(state, shown or {})),
         children=[(fmt(c), e) for c, e in diagram.children(index, node)] if has_next else [],
         parent_level=level_text(diagram, index - 1) if index > 0 else None,
         child_level=level_text(diagram, index + 1) if has_next else None,

@@ -20,7 +20,8 @@ class NodeDetails:
     kind: str
     dimension: int
     multiplicity: int
-    parents: list[tuple[str, int]] = field(default_factory=list)
+    #: None while the level before a jumped level is being worked out
+    parents: list[tuple[str, int]] | None = field(default_factory=list)
     children: list[tuple[str, int]] = field(default_factory=list)
     parent_level: str | None = None
     child_level: str | None = None
@@ -31,8 +32,13 @@ class NodeDetails:
     cell: str | None = None
 
 
-def _neighbours(text: Text, title: str, level: str | None, items: list[tuple[str, int]], width: int) -> None:
+def _neighbours(text: Text, title: str, level: str | None, items: list[tuple[str, int]] | None,
+                width: int) -> None:
     if level is None:
+        return
+    if items is None:
+        text.append(f"{title} at {level}: ", style="bold")
+        text.append("working them out…\n", style="italic")
         return
     text.append(f"{title} at {level}: {len(items)}\n", style="bold")
     line = " "
