@@ -173,10 +173,13 @@ async def deep_jump(spec: str, level: int) -> None:
         await pilot.pause()
         index = app.state.tower.index_of(Fraction(level))
         start = time.perf_counter()
+        before = app.sums
         app.go(index)
-        while app.state.index != index:
+        # the level and its sums drawn (their handlers redraw at once); the level before it, which
+        # the details want for the parents, comes after in the background and is not waited for
+        while app.state.index != index or app.sums is None or app.sums is before:
             await asyncio.sleep(0.002)
-        await pilot.pause()
+        await asyncio.sleep(0)  # the next screen refresh
         shown = time.perf_counter() - start
     diagram = Diagram(state_for_spec(spec).tower)
     start = time.perf_counter()

@@ -131,7 +131,11 @@ class ExplorerApp(Building, Dialogs, App[None]):
         self.sums = message.sums
         self.cursor = None if message.node is None else message.data.position.get(message.node)
         self.main.hide_progress()
-        self.plan_around(message.index)  # the layout may differ now that the level's widths are known
+        # the side panes' levels after the sums when those still come (a thread computing them
+        # beside the sums would slow both: they share the interpreter)
+        self._plan_after_sums = message.index if message.sums is None else None
+        if message.sums is not None:
+            self.plan_around(message.index)  # the layout may differ now that the level's widths are known
         self.main.redraw()
         # A deep level holds millions of long-lived objects; move them out of the cyclic garbage
         # collector's sight so that its full passes do not stall key presses (they are still freed
@@ -144,6 +148,10 @@ class ExplorerApp(Building, Dialogs, App[None]):
         if message.request == self._request and message.index == self.state.index and self._drawable():
             self.sums = message.sums
             self.main.redraw_sums()
+            if getattr(self, "_plan_after_sums", None) == message.index:
+                self._plan_after_sums = None
+                self.plan_around(message.index)
+                self.main.redraw_panes()
 
     @on(SideReady)
     def _side_ready(self, message: SideReady) -> None:
