@@ -4,6 +4,7 @@ contract (shared guide cli-contract.md); the JSON and CSV writers and the CLI pr
 from __future__ import annotations
 
 import os
+from itertools import repeat
 from json.encoder import py_encode_basestring as _py_quote
 from typing import Any, Iterator, TextIO
 
@@ -19,12 +20,13 @@ from engine.levels import format_level, level_to_json
 from engine.tower import Node
 
 
-def node_values(diagram: Diagram, index: int, level: dict[Node, int],
-                labels: tuple[dict[Node, str], dict[Node, str]] | None = None) -> Iterator[tuple[str, int, int]]:
-    """(label, multiplicity, dimension) of every node of a level, in display order (nothing is
-    kept: a streamed document holds one level at a time).  ``labels``: (the labels of the last
-    level of the same node space, the labels of this level, filled here), for a writer whose
-    levels share nodes, as S_N's do."""
+def node_columns(diagram: Diagram, index: int, level: dict[Node, int],
+                 labels: tuple[dict[Node, str], dict[Node, str]] | None = None,
+                 ) -> tuple[Iterator[str], Iterator[int], Iterator[int]]:
+    """The labels, multiplicities and dimensions of the nodes of a level, in display order, as
+    three iterators (nothing is kept: a streamed document holds one level at a time).
+    ``labels``: (the labels of the last level of the same node space, the labels of this level,
+    filled here), for a writer whose levels share nodes, as S_N's do."""
     format_node = diagram.tower.format
     dimension = diagram.dimension_lookup(index)
     nodes = diagram.sorted_nodes(index, level)
@@ -41,7 +43,13 @@ def node_values(diagram: Diagram, index: int, level: dict[Node, int],
             return found
 
         names = map(name, nodes)
-    return zip(names, map(level.__getitem__, nodes), map(dimension, nodes))
+    return names, map(level.__getitem__, nodes), map(dimension, nodes)
+
+
+def node_values(diagram: Diagram, index: int, level: dict[Node, int],
+                labels: tuple[dict[Node, str], dict[Node, str]] | None = None) -> Iterator[tuple[str, int, int]]:
+    """(label, multiplicity, dimension) of every node of a level, in display order (``node_columns``)."""
+    return zip(*node_columns(diagram, index, level, labels))
 
 
 def level_entry(diagram: Diagram, index: int, level: dict[Node, int], nodes: Any = None) -> dict[str, Any]:
@@ -150,8 +158,7 @@ def level_rows(diagram: Diagram, upto: int, start: int = 0) -> Iterator[tuple[st
     for index, level in diagram.levels_between(start, upto):
         shown = format_level(diagram.tower.level_of(index))
         space, now = diagram.tower.space_key(index), {}
-        for label, m, dim in node_values(diagram, index, level, (labels.get(space, {}), now)):
-            yield shown, label, m, dim
+        yield from zip(repeat(shown), *node_columns(diagram, index, level, (labels.get(space, {}), now)))
         labels[space] = now
 
 
