@@ -230,10 +230,13 @@ class LevelJump(Capability):
     """A whole level at any depth without building the levels below it (matrix powers, characters
     or a closed form): ``level(index)`` maps every node with a path to its multiplicity;
     ``digits(index)`` estimates the decimal digits of the numbers involved (the diagram's digit
-    guard refuses past its limit)."""
+    guard refuses past its limit); ``seconds(index)``, where the jump works node by node over a
+    level that grows with the index (GL_N's closed form), estimates its time, and the diagram
+    refuses past about a minute (None: a few matrix products, cheap whatever the depth)."""
 
     level: Callable[[int], dict[Node, int]]
     digits: Callable[[int], int]
+    seconds: Callable[[int], float] | None = None
     title = "a jump to deep levels"
 
 

@@ -52,10 +52,10 @@ class Cost:
     def text(self) -> str:
         """One line: '… edges, multiplicities of about … digits: about … s and … GB'."""
         return (f"{self.edges:.2e} edges, {self.nodes:.2e} nodes, multiplicities of up to {self.digits:,} digits: "
-                f"about {_seconds(self.seconds)} and {self.bytes / 1e9:.2g} GB")
+                f"about {seconds_text(self.seconds)} and {self.bytes / 1e9:.2g} GB")
 
 
-def _seconds(value: float) -> str:
+def seconds_text(value: float) -> str:
     if value < 120:
         return f"{value:.2g} s"
     if value < 7200:

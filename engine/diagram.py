@@ -19,7 +19,7 @@ from math import log10
 from typing import Callable, Hashable, Iterator, Protocol
 
 from engine.capabilities import AlgebraLevel, ClosedForm, DiagramAlgebra, LevelJump, SizeGuard
-from engine.costs import Cost, digits_of, estimate, multiplicity_digits
+from engine.costs import TIME_LIMIT, Cost, digits_of, estimate, multiplicity_digits, seconds_text
 from engine.errors import Cancelled, TooLarge
 from engine.path_counts import PathCounts
 from engine.tower import Edge, Node, Tower
@@ -204,6 +204,21 @@ class Diagram:
                 f"{self.digit_limit:.0e}; ask for a lower level"
             )
 
+    def check_jump(self, index: int) -> None:
+        """Raise TooLarge when the family's jump to ``index`` is estimated to take more than about
+        a minute (``LevelJump.seconds``; the level not built, so the jump would be used)."""
+        if index <= self.built or self._jump is None or self._jump.seconds is None:
+            return
+        seconds = self._jump.seconds(index)
+        if seconds > TIME_LIMIT:
+            from engine.levels import format_level
+
+            raise TooLarge(
+                f"level {format_level(self.tower.level_of(index))} of {self.tower.spec} at once would take "
+                f"about {seconds_text(seconds)}, over the limit of about a minute; ask for a lower level, "
+                "or for single nodes (answered by the closed form)"
+            )
+
     def ensure(self, index: int, progress: Progress | None = None, cancel: CancelToken | None = None) -> None:
         """Build every level up to ``index`` (raises TooLarge before starting, Cancelled midway)."""
         self.tower.check_index(index)
@@ -288,6 +303,7 @@ class Diagram:
         found = self._jumped.get(index)
         if found is None:
             self.check_digits(index)
+            self.check_jump(index)
             found = self._jump.level(index)
             if len(self._jumped) > 8:
                 self._jumped.clear()

@@ -226,6 +226,13 @@ class OneBoxTower(Tower):
                 return ESTIMATE_CAP, min(all_nodes, ESTIMATE_CAP)
         return total, all_nodes
 
+    def level_node_count(self, index: int) -> int:
+        """The admissible partitions of ``index`` (an upper count, capped): exact for GL_N to level
+        20000, past it the compositions bound C(k+rows−1, rows−1)."""
+        if index > _SUMMED_LEVELS:
+            return min(comb(index + self.rows - 1, self.rows - 1), ESTIMATE_CAP)
+        return self.size_counts(index)[index]
+
     def estimate_edges(self, upto: int) -> int:
         return self._estimates(upto)[0]
 

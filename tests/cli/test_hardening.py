@@ -229,3 +229,13 @@ class _Fixed:
 
     def parse_args(self, argv):
         return self.args
+
+
+def test_a_deep_level_of_gl3_at_once_is_refused_with_the_estimate(capsys):
+    # level 2000 of GL_3: 334,334 partitions with at most 3 rows (OEIS A001399, the nearest
+    # integer to (k+3)²/12: from memory), each f^λ worked from numbers of about 5,700 digits
+    # (k!): minutes, so refused before starting; level 300 answers at once
+    err = one_line_refusal(capsys, "levels", "general-linear:n=3", "--at", "2000", "--json")
+    assert "at once would take about" in err and "min" in err
+    status, out, _ = main_output(capsys, "levels", "general-linear:n=3", "--at", "300", "--json")
+    assert status == 0 and len(json.loads(out)["levels"][0]["nodes"]) == round((300 + 3) ** 2 / 12)
