@@ -36,8 +36,11 @@ async def _type_into_dialog(pilot, key: str, text: str) -> None:
             break
         await pilot.press("tab")
         await settle(pilot)
-    await pilot.press("escape", "escape")
-    await settle(pilot)
+    for _ in range(2):  # back to the main screen (a browser holding a field takes two)
+        if pilot.app.screen is pilot.app.main:
+            break
+        await pilot.press("escape")
+        await settle(pilot)
 
 
 @pytest.mark.parametrize("key", DIALOG_KEYS)
