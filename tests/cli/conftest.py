@@ -21,7 +21,17 @@ def main_json(capsys, *args: str):
     """``towerscope ARGS --json`` in-process: the document, after checking the exit status is 0."""
     status, out, err = main_output(capsys, *args, "--json")
     assert status == 0, err
-    return json.loads(out)
+    return json.loads(out, parse_int=_exact_int)
+
+
+def _exact_int(text: str) -> int:
+    """An int of the JSON text; long ones through flint (CPython's decimal reading is quadratic:
+    seconds for the 300,000-digit multiplicities of a deep jump)."""
+    if len(text) < 4000:
+        return int(text)
+    from flint import fmpz
+
+    return int(fmpz(text))
 
 
 @pytest.fixture

@@ -41,7 +41,7 @@ CASES: list[tuple[str, ...]] = [
     ("algebra", "symmetric:n=3", "--level", "4"),
     ("kernel", "symmetric:n=2", "--level", "4", "--count", "3"),
     ("act", "symmetric:n=3", "--level", "4", "{1,2'},{2,1'},{3,3'},{4,4'}"),
-    ("gram", "symmetric:n=3", "--level", "5", "--label", "(1)"),  # a determinant of degree 320
+    ("gram", "symmetric:n=3", "--level", "4", "--label", "(1)"),  # a determinant of degree 62, folded over 20 lines
     ("gram", "orthogonal:n=3", "--level", "4", "--label", "(2)", "--matrix"),
     ("semisimple", "symmetric:n=3", "--level", "3"),
     ("series", "characters:group=symmetric(8),module=(7,1)", "--all"),
