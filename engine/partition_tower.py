@@ -206,7 +206,7 @@ class OneBoxTower(Tower):
         levels, with the compositions bound C(k+rows−1, rows−1) for the count."""
         factor = 2 if self.removes else 1
         if upto > _SUMMED_LEVELS:
-            count = min(comb(upto + self.rows - 1, self.rows - 1), ESTIMATE_CAP)
+            count = self.level_node_count(upto)
             nodes = count * (upto // 2 + 1 if self.removes else 1)
             degree = factor * min(self.rows + 1, corner_bound(upto))
             return min((upto + 1) * nodes * degree, ESTIMATE_CAP), min((upto + 1) * nodes, ESTIMATE_CAP)

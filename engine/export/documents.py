@@ -5,13 +5,8 @@ from __future__ import annotations
 
 import os
 from itertools import repeat
-from json.encoder import py_encode_basestring as _py_quote
+from json.encoder import encode_basestring  # the quoting json.dumps uses with ensure_ascii=False
 from typing import Any, Iterator, TextIO
-
-try:  # the C quoting json.dumps uses with ensure_ascii=False
-    from _json import encode_basestring as encode_basestring
-except ImportError:  # pragma: no cover - CPython always has _json
-    encode_basestring = _py_quote
 
 from engine.diagram import CancelToken, Diagram, Progress
 from engine.export import json_text
@@ -20,34 +15,35 @@ from engine.levels import format_level, level_to_json
 from engine.tower import Node
 
 
-def node_columns(diagram: Diagram, index: int, level: dict[Node, int],
-                 labels: tuple[dict[Node, str], dict[Node, str]] | None = None,
+class LevelLabels:
+    """The labels of a streamed document's nodes, kept for the last level of each node space only:
+    S_N's levels share their nodes, so a label is formatted once rather than once per level."""
+
+    def __init__(self, tower: Any) -> None:
+        self._format, self._space_key = tower.format, tower.space_key
+        self._by_space: dict[Any, dict[Node, str]] = {}
+
+    def names(self, index: int, nodes: list[Node]) -> list[str]:
+        key = self._space_key(index)
+        before, format_node = self._by_space.get(key, {}), self._format
+        names = [found if (found := before.get(node)) is not None else format_node(node) for node in nodes]
+        self._by_space[key] = dict(zip(nodes, names))
+        return names
+
+
+def node_columns(diagram: Diagram, index: int, level: dict[Node, int], labels: LevelLabels | None = None,
                  ) -> tuple[Iterator[str], Iterator[int], Iterator[int]]:
     """The labels, multiplicities and dimensions of the nodes of a level, in display order, as
-    three iterators (nothing is kept: a streamed document holds one level at a time).
-    ``labels``: (the labels of the last level of the same node space, the labels of this level,
-    filled here), for a writer whose levels share nodes, as S_N's do."""
-    format_node = diagram.tower.format
+    three iterators (nothing is kept: a streamed document holds one level at a time; ``labels``:
+    the labels met on earlier levels, for a writer of many levels)."""
     dimension = diagram.dimension_lookup(index)
     nodes = diagram.sorted_nodes(index, level)
-    if labels is None:
-        names = map(format_node, nodes)
-    else:
-        before, now = labels
-
-        def name(node: Node) -> str:
-            found = before.get(node)
-            if found is None:
-                found = format_node(node)
-            now[node] = found
-            return found
-
-        names = map(name, nodes)
+    names = map(diagram.tower.format, nodes) if labels is None else iter(labels.names(index, nodes))
     return names, map(level.__getitem__, nodes), map(dimension, nodes)
 
 
 def node_values(diagram: Diagram, index: int, level: dict[Node, int],
-                labels: tuple[dict[Node, str], dict[Node, str]] | None = None) -> Iterator[tuple[str, int, int]]:
+                labels: LevelLabels | None = None) -> Iterator[tuple[str, int, int]]:
     """(label, multiplicity, dimension) of every node of a level, in display order (``node_columns``)."""
     return zip(*node_columns(diagram, index, level, labels))
 
@@ -118,14 +114,11 @@ def write_levels_json(
     stream.write(head)
     first = True
     token = os.urandom(8).hex()
-    labels: dict[Any, dict[Node, str]] = {}  # by node space: the last level's labels only
+    labels = LevelLabels(diagram.tower)
     for index, level in diagram.levels_between(start, upto, progress, cancel):
-        space = diagram.tower.space_key(index)
-        now: dict[Node, str] = {}
         # the nodes, the bulk of the text, written by a template; the rest by json_text
         text = dumps(level_entry(diagram, index, level, token)).replace(
-            f'"{token}"', nodes_text(node_values(diagram, index, level, (labels.get(space, {}), now)), indent), 1)
-        labels[space] = now
+            f'"{token}"', nodes_text(node_values(diagram, index, level, labels), indent), 1)
         if shift and indent is not None:
             text = text.replace("\n", shift)
         stream.write(text if first else between + text)
@@ -154,12 +147,10 @@ def nodes_text(values: Iterator[tuple[str, int, int]], indent: int | None) -> st
 
 def level_rows(diagram: Diagram, upto: int, start: int = 0) -> Iterator[tuple[str, str, int, int]]:
     """(level, label, multiplicity, dimension) for every node of levels start..upto."""
-    labels: dict[Any, dict[Node, str]] = {}  # by node space: the last level's labels only
+    labels = LevelLabels(diagram.tower)
     for index, level in diagram.levels_between(start, upto):
         shown = format_level(diagram.tower.level_of(index))
-        space, now = diagram.tower.space_key(index), {}
-        yield from zip(repeat(shown), *node_columns(diagram, index, level, (labels.get(space, {}), now)))
-        labels[space] = now
+        yield from zip(repeat(shown), *node_columns(diagram, index, level, labels))
 
 
 def require_node(diagram: Diagram, index: int, node: Node, text: str) -> int:

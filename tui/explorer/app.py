@@ -148,7 +148,7 @@ class ExplorerApp(Building, Dialogs, App[None]):
         if message.request == self._request and message.index == self.state.index and self._drawable():
             self.sums = message.sums
             self.main.redraw_sums()
-            if getattr(self, "_plan_after_sums", None) == message.index:
+            if self._plan_after_sums == message.index:
                 self._plan_after_sums = None
                 self.plan_around(message.index)
                 self.main.redraw_panes()

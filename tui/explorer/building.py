@@ -56,6 +56,8 @@ class Building:
         self._side_running = False
         self._side_current: int | None = None
         self._side_cancel = threading.Event()
+        #: a level shown before its sums: its side panes are planned when the sums come
+        self._plan_after_sums: int | None = None
 
     # ----- the asked level ------------------------------------------------------------------------
     def go(self, index: int, node: Node | None = None, toward: tuple[int, Node] | None = None) -> None:

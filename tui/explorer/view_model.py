@@ -7,7 +7,7 @@ formats every label once, to size the pane); the other functions only read what 
 from __future__ import annotations
 
 from dataclasses import dataclass, field
-from typing import Any
+from typing import Any, Callable
 
 from rich.cells import cell_len
 
@@ -220,7 +220,8 @@ def pane_marks(state: ExplorerState, index: int, cursor: int | None,
     )
 
 
-def _formatted(fmt, edges: list[tuple[Node, int]] | None) -> list[tuple[str, int]] | None:  # noqa: ANN001
+def _formatted(fmt: Callable[[Node], str], edges: list[tuple[Node, int]] | None) -> list[tuple[str, int]] | None:
+    """Edges with their nodes' labels; None (not known yet) stays None."""
     return None if edges is None else [(fmt(n), e) for n, e in edges]
 
 
