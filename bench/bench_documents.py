@@ -1,9 +1,9 @@
 """Streamed documents against the build and print of the sums (issue: speed at the machine's floor).
 
-    uv run python bench/bench_documents.py [SPEC LEVEL]     # default symmetric:n=60 to 30
+    uv run python bench/bench_documents.py [SPEC LEVEL] [--runs R]   # default symmetric:n=60 to 30, 5 runs
 
 Each case is a whole `towerscope` run in a fresh subprocess with stdout to /dev/null, alternated,
-medians of 3: `levels --sums-only` (the build and the sums: the floor), `levels --json` and
+medians of 5 (``--runs``): `levels --sums-only` (the build and the sums: the floor), `levels --json` and
 `levels --csv` (streamed level by level), and `export -o FILE.json` (streamed into the atomic
 temporary file).  Peak memory is the subprocess's maximum resident size.  Targets: time within
 1.2x of the floor plus the printing, peak memory within 1.3x of the floor's.
@@ -11,6 +11,7 @@ temporary file).  Peak memory is the subprocess's maximum resident size.  Target
 
 from __future__ import annotations
 
+import argparse
 import json
 import os
 import statistics
@@ -70,7 +71,12 @@ def once(argv: list[str]) -> dict:
 
 
 def main() -> None:
-    spec, level = (sys.argv[1], sys.argv[2]) if len(sys.argv) > 2 else ("symmetric:n=60", "30")
+    parser = argparse.ArgumentParser(description=__doc__.splitlines()[0])
+    parser.add_argument("spec", nargs="?", default="symmetric:n=60")
+    parser.add_argument("level", nargs="?", default="30")
+    parser.add_argument("--runs", type=int, default=5)
+    args = parser.parse_args()
+    spec, level, runs = args.spec, args.level, args.runs
     target = os.path.join(tempfile.mkdtemp(), "levels.json")
     cases = {
         "levels --sums-only": ["levels", spec, "--to", level, "--sums-only"],
@@ -79,14 +85,14 @@ def main() -> None:
         "export -o .json": ["export", spec, "--to", level, "-o", target],
     }
     results: dict[str, list[dict]] = {name: [] for name in cases}
-    for _ in range(3):
+    for _ in range(runs):
         for name, argv in cases.items():
             results[name].append(once(argv))
     floor = statistics.median(r["s"] for r in results["levels --sums-only"])
     floor_mb = statistics.median(r["mb"] for r in results["levels --sums-only"])
-    prints = [printing(spec, level) for _ in range(3)]
+    prints = [printing(spec, level) for _ in range(runs)]
     print_cost = {k: statistics.median(p[k] for p in prints) for k in prints[0]}
-    print(f"{spec} to level {level} (medians of 3 alternated runs, stdout to /dev/null)")
+    print(f"{spec} to level {level} (medians of {runs} alternated runs, stdout to /dev/null)")
     print(f"  printing alone (the standard library writing the same text from memory): json {print_cost['json']:.2f} s, "
           f"indented {print_cost['export']:.2f} s, csv {print_cost['csv']:.2f} s")
     kinds = {"levels --json": "json", "levels --csv": "csv", "export -o .json": "export"}

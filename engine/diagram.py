@@ -14,14 +14,15 @@ stops when a cancel token (anything with ``is_set()``, e.g. ``threading.Event``)
 from __future__ import annotations
 
 import threading
-from engine.records import record
+from itertools import repeat
 from math import log10
-from typing import Callable, Hashable, Iterator, Protocol
+from typing import Callable, Hashable, Iterable, Iterator, Protocol
 
 from engine.capabilities import AlgebraLevel, ClosedForm, DiagramAlgebra, LevelJump, SizeGuard
 from engine.costs import TIME_LIMIT, Cost, digits_of, estimate, multiplicity_digits, seconds_text
 from engine.errors import Cancelled, TooLarge
 from engine.path_counts import PathCounts
+from engine.records import record
 from engine.tower import Edge, Node, Tower
 
 #: default size guard: refuse builds estimated to walk more edges than this
@@ -262,6 +263,13 @@ class Diagram:
         if index <= self.built:
             return self._counts.dimension_lookup(index)
         return lambda node: self.tower.dimension(index, node)
+
+    def dimensions_of(self, index: int, nodes: list[Node]) -> Iterable[int]:
+        """The dimensions of ``nodes`` at a level, in their order (``dimension_lookup`` without a
+        call per node on the built levels)."""
+        if index <= self.built:
+            return self._counts.dimensions_of(index, nodes)
+        return map(self.tower.dimension, repeat(index), nodes)
 
     def nodes(self, index: int) -> list[Node]:
         """The nodes of a level in the tower's display order."""

@@ -21,7 +21,7 @@ import threading
 import time
 from itertools import compress, repeat
 from operator import mul
-from typing import Callable, Hashable
+from typing import Callable, Hashable, Iterator
 
 from engine.errors import Cancelled
 from engine.tower import Node, Tower
@@ -280,6 +280,11 @@ class PathCounts:
         space, _ = self.levels[index]
         dims, ids = self.dimensions(index), space.ids
         return lambda node: dims[ids[node]]
+
+    def dimensions_of(self, index: int, nodes: list[Node]) -> Iterator[int]:
+        """The dimensions of some nodes of a built level, in their order (C-level lookups)."""
+        space, _ = self.levels[index]
+        return map(self.dimensions(index).__getitem__, map(space.ids.__getitem__, nodes))
 
     def sums(self, index: int, cancel=None) -> tuple[int, int, int]:
         """Σm, Σm², Σm·dim of a built level, at C speed over its lists."""

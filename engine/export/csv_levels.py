@@ -1,20 +1,51 @@
-"""CSV of the nodes of levels 0..K: one row per node (RFC 4180 via the csv module)."""
+"""CSV of the nodes of levels 0..K: one row per node, as the csv module writes them (RFC 4180,
+QUOTE_MINIMAL), level by level and a batch of rows per write."""
 
 from __future__ import annotations
 
 import csv
 import io
+from itertools import islice
 from typing import TextIO
 
 from engine.diagram import Diagram
-from engine.export.documents import level_rows
+from engine.export import json_text
+from engine.export.documents import LevelLabels, node_columns
+from engine.levels import format_level
+
+#: rows formatted and written at a time
+ROWS_AT_ONCE = 4096
+HEADER = "level,label,multiplicity,dimension\n"
+
+
+def csv_field(text: str) -> str:
+    """A text field as ``csv.writer`` writes it with the default dialect (QUOTE_MINIMAL): as it is
+    unless it holds the delimiter, the quote or a line break, and then quoted.  A field with a
+    quote or a line break is left to the csv module itself (its rule for a lone carriage return
+    differs between Python versions)."""
+    if '"' in text or "\n" in text or "\r" in text:
+        out = io.StringIO()
+        csv.writer(out, lineterminator="\n").writerow([text, ""])
+        return out.getvalue()[:-2]
+    return '"' + text + '"' if "," in text else text
 
 
 def write_csv(diagram: Diagram, upto: int, stream: TextIO, start: int = 0) -> None:
-    """Write the rows level by level (one level's rows held at a time)."""
-    writer = csv.writer(stream, lineterminator="\n")
-    writer.writerow(["level", "label", "multiplicity", "dimension"])
-    writer.writerows(level_rows(diagram, upto, start))
+    """Write the rows level by level (one batch of rows held at a time)."""
+    stream.write(HEADER)
+    labels = LevelLabels(diagram.tower, wrap=csv_field)  # each label quoted once
+    small = 1 << json_text.BIG_BITS
+    for index, level in diagram.levels_between(start, upto):
+        shown = csv_field(format_level(diagram.tower.level_of(index)))
+        names, multiplicities, dimensions = node_columns(diagram, index, level, labels)
+        while labels_part := list(islice(names, ROWS_AT_ONCE)):
+            ms, ds = list(islice(multiplicities, ROWS_AT_ONCE)), list(islice(dimensions, ROWS_AT_ONCE))
+            rows = zip(labels_part, ms, ds)
+            if max(ms) < small and max(ds) < small:
+                stream.write("".join([f"{shown},{a},{m},{d}\n" for a, m, d in rows]))
+            else:  # long ints written by flint (json_text.number_text), the same digits as str
+                number = json_text.number_text
+                stream.write("".join([f"{shown},{a},{number(m)},{number(d)}\n" for a, m, d in rows]))
 
 
 def to_csv(diagram: Diagram, upto: int, start: int = 0) -> str:

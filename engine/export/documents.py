@@ -4,9 +4,9 @@ contract (shared guide cli-contract.md); the JSON and CSV writers and the CLI pr
 from __future__ import annotations
 
 import os
-from itertools import repeat
+from itertools import islice
 from json.encoder import encode_basestring  # the quoting json.dumps uses with ensure_ascii=False
-from typing import Any, Iterator, TextIO
+from typing import Any, Callable, Iterator, TextIO
 
 from engine.diagram import CancelToken, Diagram, Progress
 from engine.export import json_text
@@ -19,8 +19,11 @@ class LevelLabels:
     """The labels of a streamed document's nodes, kept for the last level of each node space only:
     S_N's levels share their nodes, so a label is formatted once rather than once per level."""
 
-    def __init__(self, tower: Any) -> None:
-        self._format, self._space_key = tower.format, tower.space_key
+    def __init__(self, tower: Any, wrap: Callable[[str], str] | None = None) -> None:
+        """``wrap``: applied to each label once, as it is first formatted (e.g. CSV quoting)."""
+        tower_format = tower.format
+        self._format = tower_format if wrap is None else (lambda node: wrap(tower_format(node)))
+        self._space_key = tower.space_key
         self._by_space: dict[Any, dict[Node, str]] = {}
 
     def names(self, index: int, nodes: list[Node]) -> list[str]:
@@ -36,10 +39,9 @@ def node_columns(diagram: Diagram, index: int, level: dict[Node, int], labels: L
     """The labels, multiplicities and dimensions of the nodes of a level, in display order, as
     three iterators (nothing is kept: a streamed document holds one level at a time; ``labels``:
     the labels met on earlier levels, for a writer of many levels)."""
-    dimension = diagram.dimension_lookup(index)
     nodes = diagram.sorted_nodes(index, level)
     names = map(diagram.tower.format, nodes) if labels is None else iter(labels.names(index, nodes))
-    return names, map(level.__getitem__, nodes), map(dimension, nodes)
+    return names, map(level.__getitem__, nodes), iter(diagram.dimensions_of(index, nodes))
 
 
 def node_values(diagram: Diagram, index: int, level: dict[Node, int],
@@ -114,43 +116,54 @@ def write_levels_json(
     stream.write(head)
     first = True
     token = os.urandom(8).hex()
-    labels = LevelLabels(diagram.tower)
+    labels = LevelLabels(diagram.tower, wrap=encode_basestring)  # each label quoted once
+    deeper = 2 if indent is not None else 0  # a level entry sits two levels deep in the document
     for index, level in diagram.levels_between(start, upto, progress, cancel):
-        # the nodes, the bulk of the text, written by a template; the rest by json_text
-        text = dumps(level_entry(diagram, index, level, token)).replace(
-            f'"{token}"', nodes_text(node_values(diagram, index, level, labels), indent), 1)
-        if shift and indent is not None:
-            text = text.replace("\n", shift)
-        stream.write(text if first else between + text)
+        # the nodes, the bulk of the text, written by a template in batches; the rest by json_text
+        before, after = dumps(level_entry(diagram, index, level, token)).split(f'"{token}"', 1)
+        if shift:
+            before, after = before.replace("\n", shift), after.replace("\n", shift)
+        stream.write(before if first else between + before)
+        write_nodes(stream, node_columns(diagram, index, level, labels), indent, deeper)
+        stream.write(after)
         first = False
     if first:  # no level (never for start ≤ upto): json.dumps writes an empty list as []
         raise ValueError("no levels to write")
     stream.write(tail + last + dumps(first_unfaithful_json(diagram)) + ("}" if indent is None else "\n}"))
 
 
-def nodes_text(values: Iterator[tuple[str, int, int]], indent: int | None) -> str:
-    """The list of nodes of a level entry (at depth 0) as ``json.dumps(..., ensure_ascii=False,
-    indent=indent)`` writes it, one template per node instead of the generic encoder."""
-    values = list(values)
-    quote = encode_basestring
+#: nodes formatted and written at a time (a level's text is never held whole)
+NODES_AT_ONCE = 4096
+
+
+def write_nodes(stream: TextIO, columns: tuple[Iterator[str], Iterator[int], Iterator[int]], indent: int | None,
+                deeper: int = 0) -> None:
+    """Write the list of nodes of a level entry as ``json.dumps(..., ensure_ascii=False,
+    indent=indent)`` writes it for an entry ``deeper`` levels into a document: one template per
+    node instead of the generic encoder, NODES_AT_ONCE nodes per write.  ``columns``: the labels
+    already quoted as JSON strings, the multiplicities and the dimensions (``node_columns``)."""
+    quoted, multiplicities, dimensions = columns
     small = 1 << json_text.BIG_BITS
-    number = str if all(m < small and d < small for _, m, d in values) else json_text.number_text
     if indent is None:
-        items = [f'{{"label": {quote(a)}, "multiplicity": {number(m)}, "dimension": {number(d)}}}'
-                 for a, m, d in values]
-        return "[" + ", ".join(items) + "]"
-    p2, p3 = " " * (2 * indent), " " * (3 * indent)
-    items = [f'{p2}{{\n{p3}"label": {quote(a)},\n{p3}"multiplicity": {number(m)},\n{p3}"dimension": {number(d)}\n{p2}}}'
-             for a, m, d in values]
-    return "[\n" + ",\n".join(items) + "\n" + " " * indent + "]" if items else "[]"
-
-
-def level_rows(diagram: Diagram, upto: int, start: int = 0) -> Iterator[tuple[str, str, int, int]]:
-    """(level, label, multiplicity, dimension) for every node of levels start..upto."""
-    labels = LevelLabels(diagram.tower)
-    for index, level in diagram.levels_between(start, upto):
-        shown = format_level(diagram.tower.level_of(index))
-        yield from zip(repeat(shown), *node_columns(diagram, index, level, labels))
+        opening, between, closing = "[", ", ", "]"
+    else:
+        pad = " " * indent
+        p2, p3 = pad * (2 + deeper), pad * (3 + deeper)
+        opening, between, closing = "[\n", ",\n", "\n" + pad * (1 + deeper) + "]"
+    empty = True
+    while names := list(islice(quoted, NODES_AT_ONCE)):
+        ms, ds = list(islice(multiplicities, NODES_AT_ONCE)), list(islice(dimensions, NODES_AT_ONCE))
+        if max(ms) >= small or max(ds) >= small:  # long ints written by flint, the same digits
+            ms, ds = list(map(json_text.number_text, ms)), list(map(json_text.number_text, ds))
+        rows = zip(names, ms, ds)
+        if indent is None:
+            items = [f'{{"label": {a}, "multiplicity": {m}, "dimension": {d}}}' for a, m, d in rows]
+        else:
+            items = [f'{p2}{{\n{p3}"label": {a},\n{p3}"multiplicity": {m},\n{p3}"dimension": {d}\n{p2}}}'
+                     for a, m, d in rows]
+        stream.write((opening if empty else between) + between.join(items))
+        empty = False
+    stream.write("[]" if empty else closing)
 
 
 def require_node(diagram: Diagram, index: int, node: Node, text: str) -> int:
