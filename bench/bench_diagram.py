@@ -1,7 +1,8 @@
 """Speed of the diagram against honest pure-Python floors (issue: speed at the machine's floor).
 
-    uv run python bench/bench_diagram.py            # S_60 to level 30 and S_80 to level 40
+    uv run python bench/bench_diagram.py            # S_60 to 30, S_80 to 40, the classical towers to 30
     uv run python bench/bench_diagram.py --quick    # S_60 only
+    uv run --group bench python bench/bench_diagram.py   # with the numpy machine floor
 
 Two comparisons per case, each the median of alternated runs in one fresh subprocess:
 
@@ -11,16 +12,22 @@ Two comparisons per case, each the median of alternated runs in one fresh subpro
   level computed by ``[sum(map(previous.__getitem__, parents)) for parents in step]`` over
   parent positions precomputed for every level — integer ids, precomputed edges, one C-level
   reduction per node, the fastest plain-Python form of the recurrence we know.
-- pull: the engine's own loop (``PathCounts.build_next`` without learning) over the passages a
-  build has learned, level sizes as built — what a re-sweep of known edges costs.
+- numbered: the same floor numbering its edges itself, level by level, from the memo's
+  children (a dict per level), the plain-Python form of the sweep with learning.
+- pull: the time that same sweep spends in the engine's pull (``PathCounts.pull``, the part of
+  ``build_next`` after the learning), timed inside the sweep — the sweep's work on the floor's
+  terms (edges known).
 - build: the engine's whole build from the spec against an independent pure-Python build that
   takes its edges from one pass over the lattice of small partitions ν (a node (N−|ν|, ν);
   restriction ν → ν and ν−□, induction ν → ν and ν+□; valid in the stable range N ≥ 2·level).
   Peak memory: the maximum resident size of a fresh subprocess doing only that build.
 
-No faster non-pure-Python floor is reported for the sweep: each step is a sparse 0/1 matrix
-over up to 10^5 nodes, which python-flint (dense matrices) cannot hold, and numpy is not a
-dependency of the project.  The finite towers' jumps (dense, small) use flint: bench_groups.py.
+- machine: a floor below pure Python (with the bench group: ``uv run --group bench python
+  bench/bench_diagram.py``): every level modulo enough primes below 2^31 for an a priori bound,
+  one numpy gather and ``numpy.add.reduceat`` per level over the same parent positions, the top
+  level rebuilt exactly by CRT.  It says how far the engine is from the machine, not only from
+  Python.  (python-flint's matrices are dense, and a step is a sparse 0/1 matrix over up to 10^5
+  nodes; the finite towers' jumps, dense and small, use flint: bench_groups.py.)
 """
 
 from __future__ import annotations
@@ -36,8 +43,11 @@ sys.set_int_max_str_digits(0)
 from engine.diagram import Diagram
 from engine.path_counts import PathCounts
 from engine.specs import parse_spec
-spec, upto, runs = sys.argv[1], int(sys.argv[2]), int(sys.argv[3])
+from fractions import Fraction
+spec, level, runs = sys.argv[1], Fraction(sys.argv[2]), int(sys.argv[3])
 tower = parse_spec(spec)
+upto = tower.index_of(level)
+symmetric = spec.startswith("symmetric:")
 reference = Diagram(tower)
 reference.ensure(upto)
 memo, layouts, steps, edges = {}, [[tower.root()]], [], 0
@@ -60,30 +70,53 @@ def floor():
         values = [sum(map(get, p)) for p in step]
     return values
 
+def numbered():
+    # the floor with its numbering: each level's children (from the same memo) numbered by a
+    # dict into parent positions, then pulled as in floor() — the plain-Python form of the
+    # sweep with learning (it numbers every level anew; the engine learns a repeating step once)
+    layout, values = [tower.root()], [1]
+    for index in range(upto):
+        key, parents = tower.step_key(index), {}
+        for j, node in enumerate(layout):
+            for child, e in memo[(key, node)]:
+                found = parents.get(child)
+                if found is None:
+                    parents[child] = [j] * e
+                else:
+                    found.extend([j] * e)
+        layout, get = list(parents), values.__getitem__
+        values = [sum(map(get, p)) for p in parents.values()]
+    return values
+
 class Memo:
     def __init__(self, tower): self.tower = tower
     def __getattr__(self, name): return getattr(self.tower, name)
     def children(self, index, node): return memo[(self.tower.step_key(index), node)]
 
+class Timed(PathCounts):
+    # the engine's sweep, with the time spent in its pull (PathCounts.pull) summed
+    pulled = 0.0
+    def pull(self, *args, **kwargs):
+        start = time.perf_counter()
+        try:
+            return super().pull(*args, **kwargs)
+        finally:
+            Timed.pulled += time.perf_counter() - start
+
 memo_tower = Memo(tower)
 def sweep():
-    counts = PathCounts(memo_tower)
+    counts = Timed(memo_tower)
     while len(counts.levels) <= upto:
         counts.build_next()
     return counts
 
-learned = sweep()
-for i in range(upto):  # a passage pulled once has dropped its parents: rebuild them for the pull
-    if learned.passage(i).parents is None:
-        PathCounts._parents_again(learned.passage(i))
-plan = [(learned.passage(i).parents, len(learned.levels[i + 1][1]), len(learned.levels[i][0].nodes)) for i in range(upto)]
+pulls = []
 def pull():
-    # the engine's pull alone, over its own learned passages (build_next without the learning)
-    values = [1]
-    for parents, size, pad in plan:
-        get = (values + [0] * (pad - len(values))).__getitem__
-        values = [sum(map(get, p)) for p in parents[:size]]
-    return values
+    # the same sweep, timed for the part the floor does: the engine's pull inside it, over the
+    # parents as they stand when build_next pulls each level (learning left out)
+    Timed.pulled = 0.0
+    sweep()
+    pulls.append(Timed.pulled)
 
 def build():
     Diagram(parse_spec(spec)).ensure(upto)
@@ -92,13 +125,53 @@ def lattice():
     import bench_floors
     return bench_floors.symmetric_by_small_partitions(tower.n, upto)
 
+try:
+    import numpy
+except ImportError:  # the bench group is not installed: no machine floor
+    numpy = None
+
+def machine():
+    # the machine floor: every level modulo primes below 2^31 (int64 with room for the sums),
+    # one gather and one numpy.add.reduceat per level over the same precomputed parent positions,
+    # the top level rebuilt exactly by Garner's mixed-radix CRT (Knuth, TAOCP vol. 2, 4.3.2)
+    mods = numpy.array(primes, dtype=numpy.int64)[None, :]
+    values = numpy.ones((1, len(primes)), dtype=numpy.int64)  # a row per node: a gather moves rows
+    for gather, starts in csr:
+        values = numpy.add.reduceat(values[gather], starts, axis=0) % mods
+    top = values.T.tolist()
+    out, modulus = top[0], primes[0]
+    for p, residues in zip(primes[1:], top[1:]):
+        inverse = pow(modulus, -1, p)
+        out = [x + modulus * (((r - x) * inverse) % p) for x, r in zip(out, residues)]
+        modulus *= p
+    return out
+
+if numpy is not None:  # precomputed like the floor's parent positions, not timed
+    csr, bits = [], 1
+    for index, step in enumerate(steps):
+        csr.append((numpy.fromiter((j for p in step for j in p), dtype=numpy.int64),
+                    numpy.cumsum([0] + [len(p) for p in step[:-1]], dtype=numpy.int64)))
+        # an a priori bound: a node's count is at most the product, over the levels below, of
+        # the largest number of edges out of one node
+        bits += max(sum(e for _, e in memo[(tower.step_key(index), node)]) for node in layouts[index]).bit_length()
+    primes, candidate = [], (1 << 31) - 1
+    while 30 * len(primes) < bits:
+        if all(candidate % q for q in range(3, int(candidate ** 0.5) + 1, 2)):
+            primes.append(candidate)
+        candidate -= 2
+
 sys.path.insert(0, "bench")
-times = {"floor": [], "pull": [], "sweep": [], "build": [], "lattice": []}
+works = [("floor", floor), ("numbered", numbered), ("sweep", pull), ("build", build)] + ([("lattice", lattice)] if symmetric else []) \
+    + ([("machine", machine)] if numpy is not None else [])
+times = {name: [] for name, _ in works}
 for _ in range(runs):
-    for name, work in (("floor", floor), ("pull", pull), ("sweep", sweep), ("build", build), ("lattice", lattice)):
+    for name, work in works:
         start = time.perf_counter(); work(); times[name].append(time.perf_counter() - start)
 assert dict(zip(layouts[-1], floor())) == reference.level(upto) == sweep().level(upto)
-assert sorted(lattice()) == sorted(reference.level(upto).values())
+assert sorted(numbered()) == sorted(reference.level(upto).values())
+assert not symmetric or sorted(lattice()) == sorted(reference.level(upto).values())
+assert numpy is None or dict(zip(layouts[-1], machine())) == reference.level(upto)
+times["pull"] = pulls
 print(json.dumps({"edges": edges, **{k: statistics.median(v) for k, v in times.items()}}))
 """
 
@@ -118,6 +191,11 @@ print(resource.getrusage(resource.RUSAGE_SELF).ru_maxrss / 1024)
 """
 
 
+#: the classical towers in their stable range (issue: the sweep on S_60/S_80 and the classical towers)
+CLASSICAL = [("general-linear:n=30", 30), ("orthogonal:n=30", 30), ("symplectic:n=60", 30),
+             ("mixed:n=30,word=" + "vd" * 15, 30)]
+
+
 def run(code: str, *args: object) -> str:
     return subprocess.run([sys.executable, "-c", code, *map(str, args)], check=True, capture_output=True, text=True).stdout
 
@@ -126,17 +204,32 @@ def main() -> None:
     parser = argparse.ArgumentParser(description=__doc__.splitlines()[0])
     parser.add_argument("--quick", action="store_true")
     parser.add_argument("--runs", type=int, default=3)
+    parser.add_argument("--only", metavar="WORD", help="only the cases whose spec holds WORD")
     args = parser.parse_args()
-    cases = [("symmetric:n=60", 60)] + ([] if args.quick else [("symmetric:n=80", 80)])
-    for spec, upto in cases:
-        r = json.loads(run(CASE, spec, upto, args.runs))
-        ours_mb, floor_mb = (float(run(PEAK, spec, upto, which)) for which in ("engine", "lattice"))
-        print(f"{spec} to level {upto // 2}: {r['edges']:,} edges (medians of {args.runs} alternated runs)")
-        print(f"  pull (the engine's loop over its learned edges): {r['pull']:.2f} s, floor {r['floor']:.2f} s: "
+    cases = [("symmetric:n=60", 30)] + ([] if args.quick else [("symmetric:n=80", 40)] + CLASSICAL)
+    if args.only:
+        cases = [(spec, level) for spec, level in [("symmetric:n=60", 30), ("symmetric:n=80", 40)] + CLASSICAL
+                 if args.only in spec]
+    for spec, level in cases:
+        r = json.loads(run(CASE, spec, level, args.runs))
+        print(f"{spec} to level {level}: {r['edges']:,} edges (medians of {args.runs} alternated runs)")
+        print(f"  pull (the sweep's time in the engine's pull): {r['pull']:.2f} s, floor {r['floor']:.2f} s: "
               f"{r['pull'] / r['floor']:.2f}x the floor")
-        print(f"  sweep with learning (edges given by a memo): {r['sweep']:.2f} s: {r['sweep'] / r['floor']:.2f}x the floor")
-        print(f"  build: engine {r['build']:.2f} s, small-partition build {r['lattice']:.2f} s: "
-              f"{r['build'] / r['lattice']:.2f}x; peak {ours_mb:.0f} MB against {floor_mb:.0f} MB ({ours_mb / floor_mb:.2f}x)")
+        print(f"  sweep with learning (edges given by a memo): {r['sweep']:.2f} s: {r['sweep'] / r['floor']:.2f}x the floor, "
+              f"{r['sweep'] / r['numbered']:.2f}x the floor that numbers its edges ({r['numbered']:.2f} s)")
+        if "machine" in r:
+            print(f"  machine floor (numpy, every level modulo primes, the top level rebuilt by CRT): "
+                  f"{r['machine']:.3f} s: the pull is {r['pull'] / r['machine']:.1f}x, the whole build "
+                  f"{r['build'] / r['machine']:.1f}x")
+        else:
+            print("  machine floor: not measured (numpy absent: uv run --group bench python bench/bench_diagram.py)")
+        if "lattice" in r:
+            upto = 2 * level
+            ours_mb, floor_mb = (float(run(PEAK, spec, upto, which)) for which in ("engine", "lattice"))
+            print(f"  build: engine {r['build']:.2f} s, small-partition build {r['lattice']:.2f} s: "
+                  f"{r['build'] / r['lattice']:.2f}x; peak {ours_mb:.0f} MB against {floor_mb:.0f} MB ({ours_mb / floor_mb:.2f}x)")
+        else:
+            print(f"  build from the spec: {r['build']:.2f} s")
 
 
 if __name__ == "__main__":

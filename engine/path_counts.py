@@ -115,31 +115,33 @@ class PathCounts:
         pairs = self.tower.children(index, passage.source.nodes[ident])
         target = passage.target
         ids, nodes, parents = target.ids, target.nodes, passage.parents
-        if parents is not None and len(parents) < len(nodes):
-            parents.extend([()] * (len(nodes) - len(parents)))
+        children, counts = tuple(zip(*pairs)) or ((), ())
         found: list[int] = []
-        counts: list[int] | None = None
-        for child, e in pairs:
-            c = ids.get(child)
+        get, keep = ids.get, found.append
+        for child in children:  # a node's children are distinct: number the new ones as met
+            c = get(child)
             if c is None:
                 c = ids[child] = len(nodes)
                 nodes.append(child)
-                if parents is not None:
-                    parents.append(())
-            found.append(c)
-            if e != 1 and counts is None:
-                counts = [1] * (len(found) - 1)
-            if counts is not None:
-                counts.append(e)
+            keep(c)
+        if parents is not None:
+            if len(parents) < len(nodes):
+                parents.extend(repeat((), len(nodes) - len(parents)))
+        if counts.count(1) == len(counts):  # every edge simple (the common case)
             if parents is not None:
-                if e == 1:
-                    parents[c] += (ident,)
-                elif e <= REPEAT_UP_TO:
-                    parents[c] += (ident,) * e
-                else:
-                    passage.weighted.setdefault(c, []).append((ident, e))
-        if counts is not None:
-            passage.counts[ident] = tuple(counts)
+                one = (ident,)
+                for c in found:
+                    parents[c] += one
+        else:
+            passage.counts[ident] = counts
+            if parents is not None:
+                for c, e in zip(found, counts):
+                    if e == 1:
+                        parents[c] += (ident,)
+                    elif e <= REPEAT_UP_TO:
+                        parents[c] += (ident,) * e
+                    else:
+                        passage.weighted.setdefault(c, []).append((ident, e))
         kids[ident] = tuple(found)
 
     @staticmethod
@@ -208,12 +210,27 @@ class PathCounts:
         with self.lock:
             while passage.upto in kids:
                 passage.upto += 1
-            parents = passage.parents
             size = len(passage.target.nodes)
+        values = self.pull(passage, previous, size, progress, cancel)
+        self.levels.append((passage.target, values))
+        passage.pulls += 1
+        if passage.pulls == 1:
+            with self.lock:
+                passage.parents, passage.weighted = None, {}
+
+    def pull(self, passage: Passage, previous: list[int], size: int,
+             progress: Callable[[float], None] | None = None, cancel=None) -> list[int]:
+        """The first ``size`` values of the target space from ``previous`` (by source number) over
+        the passage's learned parents: ``sum(map(previous.__getitem__, parents))`` per node, a
+        chunk at a time under the lock; counts above REPEAT_UP_TO are multiplied in after."""
+        with self.lock:
+            if passage.parents is None:
+                self._parents_again(passage)
+            parents = passage.parents
             if len(parents) < size:
                 parents.extend([()] * (size - len(parents)))
-        if len(previous) < len(source_space.nodes):  # sources numbered after the level was built
-            previous = previous + [0] * (len(source_space.nodes) - len(previous))
+        if len(previous) < len(passage.source.nodes):  # sources numbered after the level was built
+            previous = previous + [0] * (len(passage.source.nodes) - len(previous))
         get = previous.__getitem__
         values: list[int] = []
         for start in range(0, size, CHUNK):
@@ -229,11 +246,7 @@ class PathCounts:
                 values[child] += sum(get(p) * e for p, e in pairs)
         if cancel is not None and cancel.is_set():
             raise Cancelled()
-        self.levels.append((passage.target, values))
-        passage.pulls += 1
-        if passage.pulls == 1:
-            with self.lock:
-                passage.parents, passage.weighted = None, {}
+        return values
 
     # ----- reading --------------------------------------------------------------------------
     def multiplicity(self, index: int, node: Node) -> int:
