@@ -100,7 +100,7 @@ def write_levels_json(
     progress: Progress | None = None, cancel: CancelToken | None = None,
 ) -> None:
     """Write ``levels_document`` as JSON level by level: the same text as ``json.dumps(document,
-    ensure_ascii=False, indent=indent)``, without holding more than one level's text."""
+    ensure_ascii=False, indent=indent)``, holding the text of one batch of nodes at a time."""
     def dumps(value: Any) -> str:
         return json_text.dumps(value, indent=indent)
 
