@@ -118,15 +118,17 @@ class PathCounts:
         children, counts = tuple(zip(*pairs)) or ((), ())
         found: list[int] = []
         get, keep = ids.get, found.append
+        if parents is not None and len(parents) < len(nodes):  # numbered by another passage
+            parents.extend(repeat((), len(nodes) - len(parents)))
+        grow = None if parents is None else parents.append
         for child in children:  # a node's children are distinct: number the new ones as met
             c = get(child)
             if c is None:
                 c = ids[child] = len(nodes)
                 nodes.append(child)
+                if grow is not None:
+                    grow(())
             keep(c)
-        if parents is not None:
-            if len(parents) < len(nodes):
-                parents.extend(repeat((), len(nodes) - len(parents)))
         if counts.count(1) == len(counts):  # every edge simple (the common case)
             if parents is not None:
                 one = (ident,)
