@@ -261,3 +261,23 @@ def test_crossings_between_agrees_with_counting_every_pair():
         brute = sum(1 for i, (a1, b1, _) in enumerate(edges) for a2, b2, _ in edges[i + 1:]
                     if (a1 - a2) * (where[b1] - where[b2]) < 0)
         assert crossings_between(top, bottom, edges) == brute
+
+
+@pytest.mark.skipif(shutil.which("pdflatex") is None, reason="pdflatex is not installed")
+def test_latex_table_fits_a_12cm_line_with_nothing_overfull(tmp_path):
+    # LaTeX itself says when a line or a cell is too wide: "Overfull \hbox" in its log (common
+    # practice); each table set as \input would set it, in a 12 cm text block
+    from engine.export.latex_table import to_latex_table
+    from engine.levels import parse_level
+
+    tables = [to_latex_table(_diagram(spec), _diagram(spec).tower.index_of(parse_level(last)))
+              for spec, last in ((S6, "4"), ("symmetric:n=4", "3"), ("su2:kind=icosahedral", "8"))]
+    (tmp_path / "t.tex").write_text(
+        "\\documentclass{article}\n\\usepackage{booktabs,tabularx}\n"
+        "\\usepackage[textwidth=12cm,paperwidth=20cm,paperheight=40cm]{geometry}\n\\begin{document}\n"
+        + "\n\\bigskip\n".join(tables) + "\\end{document}\n")
+    run = subprocess.run(["pdflatex", "-interaction=nonstopmode", "-halt-on-error", "t.tex"], cwd=tmp_path,
+                         capture_output=True, text=True, timeout=120)
+    assert run.returncode == 0, run.stdout[-3000:]
+    log = (tmp_path / "t.log").read_text(errors="replace")
+    assert "Overfull \\hbox" not in log, re.findall(r"Overfull[^\n]*", log)
