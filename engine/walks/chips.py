@@ -23,6 +23,8 @@ from engine.walks.critical import reduced_cartan
 
 #: bulk topplings (a node toppled q times at once counts once) before giving up
 MAX_ROUNDS = 2_000_000
+#: chips per node (in units of the largest C̃_ii) above which stabilising starts with a jump
+JUMP_ABOVE = 64
 #: recurrent configurations listed at most
 MAX_LISTED = 20_000
 
@@ -33,12 +35,21 @@ class Sandpile:
     cartan: tuple[tuple[int, ...], ...]
 
     def stabilise(self, config: list[int]) -> tuple[list[int], int]:
-        """(the stable configuration, the number of topplings)."""
+        """(the stable configuration, the number of topplings).  A configuration with many chips
+        first topples, at once, a vector known to be at most its odometer (``_sure_topplings``)."""
         c = list(config)
         r = len(c)
         if any(self.cartan[i][i] <= 0 for i in range(r)):
             raise UserError("a node with C̃_ii ≤ 0 never stabilises: this graph is not a McKay graph of a faithful module")
         topplings, rounds = 0, 0
+        if sum(c) > JUMP_ABOVE * r * max(self.cartan[i][i] for i in range(r)):
+            sure = self._sure_topplings(c)
+            for i, q in enumerate(sure):
+                if q:
+                    row = self.cartan[i]
+                    for j in range(r):
+                        c[j] -= q * row[j]
+            topplings = sum(sure)
         queue = deque(i for i in range(r) if c[i] >= self.cartan[i][i])
         while queue:
             i = queue.popleft()
@@ -59,6 +70,20 @@ class Sandpile:
             if c[i] >= self.cartan[i][i]:
                 queue.append(i)
         return c, topplings
+
+    def _sure_topplings(self, config: list[int]) -> list[int]:
+        """u = max(0, ⌊(c − c_max)·C̃⁻¹⌋), at most the odometer x of c (the topplings of its
+        stabilisation s = c − x·C̃).  Since 0 ≤ s ≤ c_max and C̃⁻¹ ≥ 0 entrywise (C̃ a non-singular
+        M-matrix: Berman and Plemmons, *Nonnegative Matrices in the Mathematical Sciences*, 1979,
+        6.2), x ≥ (c − c_max)·C̃⁻¹.  Toppling u first, chips going negative where they must, and then
+        only legal topplings ends at s: by the least action principle (a 2010 result on sandpile
+        growth) the legal topplings from c − u·C̃ are x − u.  What is left is at most c_max·C̃⁻¹ + 1
+        topplings per node, however many chips c holds."""
+        from flint import fmpz_mat
+
+        excess = [x - t for x, t in zip(config, self.maximal())]
+        solved = fmpz_mat([list(col) for col in zip(*self.cartan)]).solve(fmpz_mat([[e] for e in excess]))
+        return [max(0, int(solved[i, 0].p // solved[i, 0].q)) for i in range(len(config))]
 
     def maximal(self) -> list[int]:
         return [self.cartan[i][i] - 1 for i in range(len(self.labels))]
