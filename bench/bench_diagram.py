@@ -4,7 +4,8 @@
     uv run python bench/bench_diagram.py --quick    # S_60 only
     uv run --group bench python bench/bench_diagram.py   # with the numpy machine floor
 
-Two comparisons per case, each the median of alternated runs in one fresh subprocess:
+Comparisons per case, each the median of alternated runs in one fresh subprocess (``--runs``, more
+for a case whose sweep takes under a second: up to 15, for about 3 s of sweeping):
 
 - sweep: the engine's build with the tower's children answered from a memo (so the partition
   arithmetic is left out, as the floor leaves it out; the engine's numbering and learning of
@@ -164,6 +165,8 @@ sys.path.insert(0, "bench")
 works = [("floor", floor), ("numbered", numbered), ("sweep", pull), ("build", build)] + ([("lattice", lattice)] if symmetric else []) \
     + ([("machine", machine)] if numpy is not None else [])
 times = {name: [] for name, _ in works}
+start = time.perf_counter(); pull(); pulls.clear()
+runs = max(runs, min(15, int(3.0 / (time.perf_counter() - start))))  # short cases: more runs
 for _ in range(runs):
     for name, work in works:
         start = time.perf_counter(); work(); times[name].append(time.perf_counter() - start)
@@ -172,7 +175,7 @@ assert sorted(numbered()) == sorted(reference.level(upto).values())
 assert not symmetric or sorted(lattice()) == sorted(reference.level(upto).values())
 assert numpy is None or dict(zip(layouts[-1], machine())) == reference.level(upto)
 times["pull"] = pulls
-print(json.dumps({"edges": edges, **{k: statistics.median(v) for k, v in times.items()}}))
+print(json.dumps({"edges": edges, "runs": runs, **{k: statistics.median(v) for k, v in times.items()}}))
 """
 
 PEAK = r"""
@@ -212,7 +215,7 @@ def main() -> None:
                  if args.only in spec]
     for spec, level in cases:
         r = json.loads(run(CASE, spec, level, args.runs))
-        print(f"{spec} to level {level}: {r['edges']:,} edges (medians of {args.runs} alternated runs)")
+        print(f"{spec} to level {level}: {r['edges']:,} edges (medians of {r['runs']} alternated runs)")
         print(f"  pull (the sweep's time in the engine's pull): {r['pull']:.2f} s, floor {r['floor']:.2f} s: "
               f"{r['pull'] / r['floor']:.2f}x the floor")
         print(f"  sweep with learning (edges given by a memo): {r['sweep']:.2f} s: {r['sweep'] / r['floor']:.2f}x the floor, "
