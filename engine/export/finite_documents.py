@@ -96,7 +96,10 @@ def growth_document(tower, label: str, upto: int) -> dict[str, Any]:
 
 
 # ----- walk ------------------------------------------------------------------------------------
-def walk_document(tower, steps: int, lazy: bool = False, epsilon: Fraction = Fraction(1, 4)) -> dict[str, Any]:
+def walk_document(tower, steps: int, lazy: bool = False, epsilon: Fraction = Fraction(1, 4),
+                  spectrum: bool = True) -> dict[str, Any]:
+    """The walk's document (``walk --json``); ``spectrum=False`` leaves out the eigenvalues (or
+    the characteristic factors), whose text for irrational character values loads sympy."""
     from engine.walks.chain import characteristic_factors, eigenvalues, walk
 
     view = finite_view(tower, "walk")
@@ -109,6 +112,8 @@ def walk_document(tower, steps: int, lazy: bool = False, epsilon: Fraction = Fra
         "epsilon": rational(epsilon), "mixing_time": w.mixing_time(epsilon),
         "step_constant": view.constant,
     }
+    if not spectrum:
+        return document
     values = eigenvalues(tower, view)
     if values is not None:
         document["eigenvalues"] = [{"class": name, "value": exact_text(x if not lazy else (x + 1) * Fraction(1, 2))}

@@ -66,3 +66,35 @@ async def test_g_jumps_to_level_one_million_on_su2() -> None:
         level = app.state.diagram.level_at(1000000)
         assert len(level) == 5  # even levels of the bipartite graph: the 5 nodes of one side
         assert app.state.diagram.built < 1000
+
+
+async def test_the_plots_come_before_the_closed_form(monkeypatch) -> None:
+    # the closed form's text may load sympy (seconds): the plots must not wait for it.  The closed
+    # form is held back here until the plot is on the screen.  D_5 on r_1 (dimension 2): the
+    # trivial module's count grows like 2·1·2^k/10 = (1/10)·2^k (the growth rule above, from memory)
+    import threading
+
+    from tui.explorer.screens import growth
+
+    release, real = threading.Event(), growth._closed_form
+
+    def held(tower, label):  # noqa: ANN001
+        assert release.wait(30)
+        return real(tower, label)
+
+    monkeypatch.setattr(growth, "_closed_form", held)
+    app = app_on("characters:group=dihedral(5),module=r1")
+    async with app.run_test(size=(80, 24)) as pilot:
+        await settle(pilot)
+        await pilot.press("w")
+        for _ in range(50):
+            await pilot.pause(0.05)
+            if isinstance(app.screen, GrowthScreen) and app.screen.growth is not None:
+                break
+        screen = app.screen
+        assert screen.growth is not None and screen.query_one("#growth-plot", PlotextPlot).display
+        assert "closed form: working it out…" in text(app, "#growth-title")
+        release.set()
+        await settle(pilot)
+        assert screen.closed_form is not None and "(1/10)·2^k" in screen.closed_form
+        assert screen.closed_form in text(app, "#growth-title")

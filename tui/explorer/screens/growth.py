@@ -80,6 +80,7 @@ class GrowthScreen(Screen[None]):
         self.problem: str | None = None
         self.picture_drawn = False  # the McKay graph as a picture (else as a list: no room)
         self.closed_form: str | None = None  # "m(k) = Σ ..." of the node, when short enough to show
+        self._closed_form_pending = True  # computed after the plots are shown
 
     def compose(self) -> ComposeResult:
         yield Static(Text("reading the tower…"), id="growth-title")
@@ -95,6 +96,13 @@ class GrowthScreen(Screen[None]):
             super().__init__()
             self.documents = documents
 
+    class ClosedFormReady(Message):
+        """The node's closed form, computed after the plots (its text may load sympy)."""
+
+        def __init__(self, text: str | None) -> None:
+            super().__init__()
+            self.text = text
+
     def on_mount(self) -> None:
         self.query_one("#growth-plot", PlotextPlot).display = False
         self.query_one("#growth-graph", VerticalScroll).display = False
@@ -102,30 +110,41 @@ class GrowthScreen(Screen[None]):
 
     @work(thread=True, exclusive=True, group="growth", exit_on_error=False, description="growth documents")
     def _compute(self) -> None:
-        """The walk, lazy walk, growth and closed form (the first character tower with irrational
-        values also loads sympy, seconds): in a thread, so keys still answer."""
+        """The walk, lazy walk and growth, posted as soon as they are known; then the closed form
+        (whose text, on the first character tower with irrational values, loads sympy: seconds).
+        In a thread, so keys still answer."""
         from engine.export.finite_documents import growth_document, walk_document
 
         tower = self.state.tower
         label = tower.format(self.state.node) if self.state.node is not None else None
         documents: dict = {}
         try:
-            documents["walk"] = walk_document(tower, LEVELS)
-            documents["lazy"] = walk_document(tower, LEVELS, lazy=True)
+            # the plots need no eigenvalues (their text is what loads sympy)
+            documents["walk"] = walk_document(tower, LEVELS, spectrum=False)
+            documents["lazy"] = walk_document(tower, LEVELS, lazy=True, spectrum=False)
             documents["growth"] = growth_document(tower, label or documents["walk"]["nodes"][0], LEVELS)
-            documents["closed_form"] = _closed_form(tower, documents["growth"]["label"])
         except UserError as exc:
             documents = {"problem": str(exc)}
         except Exception as exc:  # noqa: BLE001 - a failure is said on the screen, not left as "reading"
             documents = {"problem": f"the view could not be computed: {type(exc).__name__}: {str(exc)[:200]}"}
         self.post_message(self.Ready(documents))
+        if "growth" in documents:
+            try:
+                text = _closed_form(tower, documents["growth"]["label"])
+            except Exception:  # noqa: BLE001 - the closed form is an extra line: without it the view stands
+                text = None
+            self.post_message(self.ClosedFormReady(text))
 
     def on_growth_screen_ready(self, message: "GrowthScreen.Ready") -> None:
         d = message.documents
         self.problem = d.get("problem")
         self.walk, self.lazy, self.growth = d.get("walk"), d.get("lazy"), d.get("growth")
-        self.closed_form = d.get("closed_form")
         self.action_show(self.mode)
+
+    def on_growth_screen_closed_form_ready(self, message: "GrowthScreen.ClosedFormReady") -> None:
+        self.closed_form, self._closed_form_pending = message.text, False
+        if self.mode == "growth" and self.growth is not None:
+            self.action_show(self.mode)
 
     def action_show(self, mode: str) -> None:
         self.mode = mode
@@ -167,7 +186,8 @@ class GrowthScreen(Screen[None]):
         plt.xlabel("k")
         plt.title(f"{g['label']}: {g['text']}")
         last = g["ratios"][-1]["approximately"] if g["ratios"] else "—"
-        closed = f"\n{self.closed_form}" if self.closed_form else ""
+        closed = f"\n{self.closed_form}" if self.closed_form else (
+            "\nclosed form: working it out…" if self._closed_form_pending else "")
         title.update(Text(f"1 growth  2 walk  3 McKay graph │ {g['label']}: m/leading term at k = "
                           f"{g['ratios'][-1]['k'] if g['ratios'] else '—'} ≈ {last}{closed}"))
         plot.refresh()
