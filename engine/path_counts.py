@@ -137,14 +137,19 @@ class PathCounts:
         else:
             passage.counts[ident] = counts
             if parents is not None:
-                for c, e in zip(found, counts):
-                    if e == 1:
-                        parents[c] += (ident,)
-                    elif e <= REPEAT_UP_TO:
-                        parents[c] += (ident,) * e
-                    else:
-                        passage.weighted.setdefault(c, []).append((ident, e))
+                self._add_counted(parents, passage.weighted, ident, found, counts)
         kids[ident] = tuple(found)
+
+    @staticmethod
+    def _add_counted(parents: list[tuple[int, ...]], weighted: dict[int, list[tuple[int, int]]], ident: int,
+                     found: tuple[int, ...] | list[int], counts: tuple[int, ...]) -> None:
+        """Register source ``ident``'s edges with counts: repeated in the parents up to
+        REPEAT_UP_TO, kept with their count in ``weighted`` above it."""
+        for c, e in zip(found, counts):
+            if e <= REPEAT_UP_TO:
+                parents[c] += (ident,) * e
+            else:
+                weighted.setdefault(c, []).append((ident, e))
 
     @staticmethod
     def _parents_again(passage: Passage) -> None:
@@ -161,11 +166,7 @@ class PathCounts:
                 for c in found:
                     parents[c] += (ident,)
             else:
-                for c, e in zip(found, counts):
-                    if e <= REPEAT_UP_TO:
-                        parents[c] += (ident,) * e
-                    else:
-                        weighted.setdefault(c, []).append((ident, e))
+                PathCounts._add_counted(parents, weighted, ident, found, counts)
         passage.parents, passage.weighted = parents, weighted
 
     def edges(self, index: int, node: Node) -> list[tuple[Node, int]]:

@@ -5,12 +5,10 @@ from __future__ import annotations
 
 import csv
 import io
-from itertools import islice
 from typing import TextIO
 
 from engine.diagram import Diagram
-from engine.export import json_text
-from engine.export.documents import LevelLabels, node_columns
+from engine.export.documents import LevelLabels, column_batches, node_columns
 from engine.levels import format_level
 
 #: rows formatted and written at a time
@@ -34,18 +32,10 @@ def write_csv(diagram: Diagram, upto: int, stream: TextIO, start: int = 0) -> No
     """Write the rows level by level (one batch of rows held at a time)."""
     stream.write(HEADER)
     labels = LevelLabels(diagram.tower, wrap=csv_field)  # each label quoted once
-    small = 1 << json_text.BIG_BITS
     for index, level in diagram.levels_between(start, upto):
         shown = csv_field(format_level(diagram.tower.level_of(index)))
-        names, multiplicities, dimensions = node_columns(diagram, index, level, labels)
-        while labels_part := list(islice(names, ROWS_AT_ONCE)):
-            ms, ds = list(islice(multiplicities, ROWS_AT_ONCE)), list(islice(dimensions, ROWS_AT_ONCE))
-            rows = zip(labels_part, ms, ds)
-            if max(ms) < small and max(ds) < small:
-                stream.write("".join([f"{shown},{a},{m},{d}\n" for a, m, d in rows]))
-            else:  # long ints written by flint (json_text.number_text), the same digits as str
-                number = json_text.number_text
-                stream.write("".join([f"{shown},{a},{number(m)},{number(d)}\n" for a, m, d in rows]))
+        for rows in column_batches(node_columns(diagram, index, level, labels), ROWS_AT_ONCE):
+            stream.write("".join([f"{shown},{a},{m},{d}\n" for a, m, d in rows]))
 
 
 def to_csv(diagram: Diagram, upto: int, start: int = 0) -> str:

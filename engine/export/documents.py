@@ -136,14 +136,26 @@ def write_levels_json(
 NODES_AT_ONCE = 4096
 
 
+def column_batches(columns: tuple[Iterator[str], Iterator[int], Iterator[int]], size: int,
+                   ) -> Iterator[Iterator[tuple[str, int | str, int | str]]]:
+    """``node_columns`` in batches of ``size`` rows (label, multiplicity, dimension), for the
+    streamed writers' templates; in a batch holding a long int the numbers come as their text,
+    written by flint (``json_text.number_text``: the same digits as ``str``, faster)."""
+    names, multiplicities, dimensions = columns
+    small = 1 << json_text.BIG_BITS
+    while part := list(islice(names, size)):
+        ms, ds = list(islice(multiplicities, size)), list(islice(dimensions, size))
+        if max(ms) >= small or max(ds) >= small:
+            ms, ds = list(map(json_text.number_text, ms)), list(map(json_text.number_text, ds))
+        yield zip(part, ms, ds)
+
+
 def write_nodes(stream: TextIO, columns: tuple[Iterator[str], Iterator[int], Iterator[int]], indent: int | None,
                 deeper: int = 0) -> None:
     """Write the list of nodes of a level entry as ``json.dumps(..., ensure_ascii=False,
     indent=indent)`` writes it for an entry ``deeper`` levels into a document: one template per
     node instead of the generic encoder, NODES_AT_ONCE nodes per write.  ``columns``: the labels
     already quoted as JSON strings, the multiplicities and the dimensions (``node_columns``)."""
-    quoted, multiplicities, dimensions = columns
-    small = 1 << json_text.BIG_BITS
     if indent is None:
         opening, between, closing = "[", ", ", "]"
     else:
@@ -151,11 +163,7 @@ def write_nodes(stream: TextIO, columns: tuple[Iterator[str], Iterator[int], Ite
         p2, p3 = pad * (2 + deeper), pad * (3 + deeper)
         opening, between, closing = "[\n", ",\n", "\n" + pad * (1 + deeper) + "]"
     empty = True
-    while names := list(islice(quoted, NODES_AT_ONCE)):
-        ms, ds = list(islice(multiplicities, NODES_AT_ONCE)), list(islice(dimensions, NODES_AT_ONCE))
-        if max(ms) >= small or max(ds) >= small:  # long ints written by flint, the same digits
-            ms, ds = list(map(json_text.number_text, ms)), list(map(json_text.number_text, ds))
-        rows = zip(names, ms, ds)
+    for rows in column_batches(columns, NODES_AT_ONCE):
         if indent is None:
             items = [f'{{"label": {a}, "multiplicity": {m}, "dimension": {d}}}' for a, m, d in rows]
         else:
