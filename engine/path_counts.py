@@ -21,7 +21,7 @@ import threading
 import time
 from itertools import compress, repeat
 from operator import mul
-from typing import Callable, Hashable, Iterator
+from typing import Callable, Hashable, Iterable, Iterator
 
 from engine.errors import Cancelled
 from engine.tower import Node, Tower
@@ -106,43 +106,53 @@ class PathCounts:
         return found
 
     # ----- edges ----------------------------------------------------------------------------
-    def _learn(self, index: int, passage: Passage, ident: int) -> None:
-        """Ask the tower for the children of one source node; register the edges both ways (the
-        parents side only while the passage keeps it, see ``_parents_again``)."""
-        kids = passage.kids
-        if ident in kids:
-            return
-        pairs = self.tower.children(index, passage.source.nodes[ident])
+    def _learn(self, index: int, passage: Passage, idents: Iterable[int]) -> None:
+        """Ask the tower for the children of the source nodes numbered ``idents`` (those learned
+        already are skipped); register the edges both ways (the parents side only while the
+        passage keeps it, see ``_parents_again``).  One call learns a batch: the lookups are
+        made once per batch, not once per source (on GL_N, about 4 edges per source, a fifth
+        of the sweep)."""
+        kids, counts_of, weighted = passage.kids, passage.counts, passage.weighted
+        children, sources = self.tower.children, passage.source.nodes
         target = passage.target
         ids, nodes, parents = target.ids, target.nodes, passage.parents
-        children, counts = tuple(zip(*pairs)) or ((), ())
-        found: list[int] = []
-        get, keep = ids.get, found.append
+        get, number = ids.get, nodes.append
         if parents is not None and len(parents) < len(nodes):  # numbered by another passage
             parents.extend(repeat((), len(nodes) - len(parents)))
         grow = None if parents is None else parents.append
-        for child in children:  # a node's children are distinct: number the new ones as met
-            c = get(child)
-            if c is None:
-                c = ids[child] = len(nodes)
-                nodes.append(child)
-                if grow is not None:
-                    grow(())
-            keep(c)
-        if counts.count(1) == len(counts):  # every edge simple (the common case)
-            if parents is not None:
-                one = (ident,)
-                for c in found:
-                    parents[c] += one
-        else:
-            passage.counts[ident] = counts
-            if parents is not None:
-                self._add_counted(parents, passage.weighted, ident, found, counts)
-        kids[ident] = tuple(found)
+        for ident in idents:
+            if ident in kids:
+                continue
+            found: list[int] = []
+            keep = found.append
+            counts: list[int] | None = None  # the edge counts, once one is not 1
+            for child, e in children(index, sources[ident]):  # distinct children: new ones numbered as met
+                c = get(child)
+                if c is None:
+                    c = ids[child] = len(nodes)
+                    number(child)
+                    if grow is not None:
+                        grow(())
+                keep(c)
+                if counts is not None:
+                    counts.append(e)
+                elif e != 1:
+                    counts = [1] * (len(found) - 1)
+                    counts.append(e)
+            if counts is None:  # every edge simple (the common case)
+                if parents is not None:
+                    one = (ident,)
+                    for c in found:
+                        parents[c] += one
+            else:
+                counts_of[ident] = tuple(counts)
+                if parents is not None:
+                    self._add_counted(parents, weighted, ident, found, counts)
+            kids[ident] = tuple(found)
 
     @staticmethod
     def _add_counted(parents: list[tuple[int, ...]], weighted: dict[int, list[tuple[int, int]]], ident: int,
-                     found: tuple[int, ...] | list[int], counts: tuple[int, ...]) -> None:
+                     found: tuple[int, ...] | list[int], counts: tuple[int, ...] | list[int]) -> None:
         """Register source ``ident``'s edges with counts: repeated in the parents up to
         REPEAT_UP_TO, kept with their count in ``weighted`` above it."""
         for c, e in zip(found, counts):
@@ -177,7 +187,7 @@ class PathCounts:
         if kids is None:  # not learned yet: numbering and learning under the lock
             with self.lock:
                 ident = passage.source.number(node)
-                self._learn(index, passage, ident)
+                self._learn(index, passage, (ident,))
                 kids = passage.kids[ident]
         # learned nodes are only read (their lists never change): no lock, so that a build running
         # in another thread does not hold up the screen
@@ -203,8 +213,7 @@ class PathCounts:
         new = [j for j in compress(range(start, len(previous)), previous[start:]) if j not in kids]
         for first in range(0, len(new), LEARN_CHUNK):
             with self.lock:
-                for ident in new[first:first + LEARN_CHUNK]:
-                    learn(index, passage, ident)
+                learn(index, passage, new[first:first + LEARN_CHUNK])
             time.sleep(0)  # let a thread waiting for the lock take it (locks are not fair)
             if cancel is not None and cancel.is_set():
                 raise Cancelled()

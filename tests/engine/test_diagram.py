@@ -3,6 +3,8 @@
 import threading
 
 import pytest
+from hypothesis import given, settings
+from hypothesis import strategies as st
 
 from engine.diagram import Diagram
 from engine.errors import Cancelled, TooLarge, UserError
@@ -166,3 +168,38 @@ def test_gl3_square_sums_count_permutations_without_a_long_decreasing_run():
     # memory), 1, 1, 2, 6, 23, 103, 513, 2761, 15767, 94359
     d = Diagram(parse_spec("general-linear:n=3"))
     assert [d.sums(k).squares for k in range(10)] == [1, 1, 2, 6, 23, 103, 513, 2761, 15767, 94359]
+
+
+def _matrix_tower(rows):
+    """A one-step tower on the matrix ``rows`` plus a sink node z that makes every row sum the same
+    (so that the step is a tensor step with all dimensions 1)."""
+    from engine.matrix_tower import MatrixTower, NodeSet, Step
+
+    width = max(sum(row) for row in rows)
+    matrix = [list(row) + [width - sum(row)] for row in rows] + [[0] * len(rows) + [width]]
+    labels = tuple(f"x{i}" for i in range(len(rows))) + ("z",)
+    nodes = NodeSet("nodes", labels, (1,) * len(labels))
+    return MatrixTower("test", "graph", [Step("tensor", nodes, nodes, tuple(map(tuple, matrix)))], "x0")
+
+
+@settings(max_examples=60, deadline=None)
+@given(st.integers(1, 6).flatmap(lambda n: st.lists(
+    st.lists(st.sampled_from([0, 0, 1, 1, 2, 3, 16, 17, 10**18]), min_size=n, max_size=n), min_size=n, max_size=n)))
+def test_multiplicities_are_the_rows_of_matrix_powers(rows):
+    # the multiplicities at level k are the root's row of M^k (Goodman, de la Harpe, Jones,
+    # *Coxeter Graphs and Towers of Algebras*, 1989, 2.1), checked against python-flint's exact
+    # matrix powers; the counts mix 1 with small repeated counts and counts kept with their value
+    # (past REPEAT_UP_TO), and the one passage is pulled again and again (its parents dropped
+    # after the first pull and rebuilt at the second)
+    from flint import fmpz_mat
+
+    tower = _matrix_tower(rows)
+    d = Diagram(tower)
+    m = fmpz_mat([list(row) for row in tower.pattern[0].matrix])
+    size = len(rows) + 1
+    power = fmpz_mat(size, size, [int(i == j) for i in range(size) for j in range(size)])
+    labels = tower.pattern[0].source.labels
+    for k in range(7):
+        expected = {labels[j]: int(power[0, j]) for j in range(len(labels)) if power[0, j] != 0}
+        assert d.level(k) == expected
+        power = power * m
