@@ -12,7 +12,9 @@ Top vertex i and bottom vertex i' share a column when the lanes can be stacked s
 vertical ends above every bottom vertical of the same column (an order of the lanes, found by a
 topological sort); when no such order exists (e.g. a transposition) the bottom row is drawn two
 columns to the right, so no two verticals ever share a column.  Lanes with disjoint spans share a
-row.  Past ``width`` columns the diagram is listed block by block instead.
+row.  Vertices are SPACING columns apart; a diagram too wide for ``width`` columns so is drawn
+closer (COMPACT spacings, then only vertices 1, 5, 10, ... labelled), and past that it is listed
+block by block instead.
 """
 
 from __future__ import annotations
@@ -20,13 +22,18 @@ from __future__ import annotations
 from engine.algebras.diagrams import Blocks, format_diagram, vertex_name
 
 SPACING = 4
+#: closer spacings tried, in order, when SPACING is too wide (3 and 2 columns leave room for the
+#: junctions and for one blank column between lanes sharing a row)
+COMPACT = (3, 2)
+#: at a compact spacing only vertex 1 and every LABEL_EVERY-th vertex are labelled
+LABEL_EVERY = 5
 VERTEX = "●"
 
 
-def _layout(d: Blocks, r: int, shift: int) -> tuple[list[int], dict[int, int], int] | None:
+def _layout(d: Blocks, r: int, shift: int, spacing: int) -> tuple[list[int], dict[int, int], int] | None:
     """Column of every vertex, the lane row of every block that needs one, the number of rows;
     None when the aligned layout (shift 0) has no valid order of lanes."""
-    column = [SPACING * (v % r) + 1 + (shift if v >= r else 0) for v in range(2 * r)]
+    column = [spacing * (v % r) + 1 + (shift if v >= r else 0) for v in range(2 * r)]
     laned = [b for b, block in enumerate(d) if len(block) > 1 and not (len(block) == 2 and column[block[0]] == column[block[1]])]
     owner = {v: b for b, block in enumerate(d) for v in block}
     before: dict[int, set[int]] = {b: set() for b in laned}
@@ -77,22 +84,25 @@ def draw(d: Blocks, r: int, width: int = 80) -> list[str]:
     """The diagram as lines of text (box characters); a list of blocks when wider than ``width``."""
     if r == 0:
         return ["{} (the empty diagram)"]
-    found = _layout(d, r, 0)
-    shift = 0
-    if found is None:
-        shift = SPACING // 2
-        found = _layout(d, r, shift)
+    aligned = _layout(d, r, 0, SPACING) is not None
+    for spacing in (SPACING,) + COMPACT:
+        shift = 0 if aligned else spacing // 2
+        total_width = spacing * (r - 1) + 2 + shift + 2
+        if total_width <= width:
+            break
+    else:
+        return _listed(d, r, width)
+    found = _layout(d, r, shift, spacing)
     assert found is not None
     column, lane, lanes = found
-    total_width = SPACING * (r - 1) + 2 + shift + 2
-    if total_width > width:
-        return _listed(d, r, width)
     height = lanes + 6  # labels, vertices, spacer, lanes, spacer, vertices, labels
     grid = [[" "] * total_width for _ in range(height)]
     top_row, bottom_row = 1, lanes + 4
     for v in range(2 * r):
         row = top_row if v < r else bottom_row
         grid[row][column[v]] = VERTEX
+        if spacing < SPACING and v % r and (v % r + 1) % LABEL_EVERY:
+            continue
         label = vertex_name(v, r)
         label_row = 0 if v < r else height - 1
         for j, ch in enumerate(label):

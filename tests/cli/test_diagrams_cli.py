@@ -44,6 +44,24 @@ def test_diagrams_text_and_drawing(run_cli):
     assert status == 0 and r"\begin{tikzpicture}" in out
 
 
+@pytest.mark.parametrize("columns", ["80", "160"])
+def test_wide_diagrams_drawn_within_the_width(run_cli, monkeypatch, columns):
+    # 25 strands (a Brauer diagram of B_25(40)) and the product of two 22-strand diagrams are
+    # pictures, not lists of blocks, in 80 columns as in 160, and no line is wider (common practice:
+    # the product of two diagrams of cups and caps {2i-1,2i} is N^(number of closed loops) times
+    # the same diagram, here 40^11)
+    monkeypatch.setenv("COLUMNS", columns)
+    status, out, err = run_cli("diagrams", "orthogonal:n=40", "--level", "25", "--start", "123456789",
+                               "--count", "2", "--draw")
+    assert status == 0, err
+    assert out.count("●") == 2 * 2 * 25 and max(map(len, out.splitlines())) <= int(columns)
+    cups = ",".join(f"{{{2 * i - 1},{2 * i}}}" for i in range(1, 12))
+    cups += "," + ",".join(f"{{{2 * i - 1}',{2 * i}'}}" for i in range(1, 12))
+    status, out, err = run_cli("multiply", "orthogonal:n=40", "--level", "22", cups, cups, "--draw", "--exact")
+    assert status == 0, err
+    assert str(40**11) in out and out.count("●") == 44 and max(map(len, out.splitlines())) <= int(columns)
+
+
 def test_multiply_json(run_json):
     # hand computation: in B_2(3), e·(e − 2·1) = 3e − 2e = e
     doc = run_json("multiply", "orthogonal:n=3", "--level", "2", "{1,2},{1',2'}", "{1,2},{1',2'} - 2*{1,1'},{2,2'}")

@@ -23,7 +23,8 @@ def level(kind: str, r: int, *, half: bool = False, word: str = "") -> AlgebraLe
 
 def components_in_picture(lines: list[str], r: int) -> set[frozenset[int]]:
     """Read the drawing back: flood-fill along matching arms from every vertex glyph (a lane meeting
-    a │ continues on its other side: the drawing's crossing)."""
+    a │, or two side by side when vertices are drawn close, continues on their other side: the
+    drawing's crossing)."""
     grid = [list(line) for line in lines]
     at = lambda y, x: grid[y][x] if 0 <= y < len(grid) and 0 <= x < len(grid[y]) else " "
     vertex_rows = [y for y, row in enumerate(grid) if VERTEX in row]
@@ -48,8 +49,8 @@ def components_in_picture(lines: list[str], r: int) -> set[frozenset[int]]:
                 component.add(names[(y, x)])
             for arm in ARMS.get(at(y, x), ""):
                 dy, dx, back = STEP[arm]
-                if dx and at(y, x + dx) == "│":  # a crossing: the lane passes under the vertical line
-                    dx *= 2
+                while dx and at(y, x + dx) == "│":  # a crossing: the lane passes under vertical lines
+                    dx += 1 if dx > 0 else -1
                 if back in ARMS.get(at(y + dy, x + dx), ""):
                     stack.append((y + dy, x + dx))
         found.add(frozenset(component))
@@ -76,8 +77,8 @@ def test_labels_and_wide_fallback():
     d = parse_diagram("{1,2'},{2,3,1'},{3'}", 3)
     lines = draw(d, 3)
     assert lines[0].split() == ["1", "2", "3"] and lines[-1].split() == ["1'", "2'", "3'"]
-    wide = tuple((i, 25 + i) for i in range(25))
-    listed = draw(wide, 25)
+    wide = tuple((i, 45 + i) for i in range(45))
+    listed = draw(wide, 45)
     assert VERTEX not in "".join(listed) and "{1,1'}" in " ".join(listed)
     assert all(len(line) <= 80 for line in listed)
     assert draw((), 0) == ["{} (the empty diagram)"]
@@ -109,3 +110,24 @@ def test_drawing_random_larger(lev):
         lines = draw(d, lev.vertices)
         assert all(len(line) <= 80 for line in lines)
         assert components_in_picture(lines, lev.vertices) == {frozenset(block) for block in d}
+
+
+@pytest.mark.parametrize("lev", [level("partition", 21), level("brauer", 26), level("symmetric-group", 30),
+                                 level("brauer", 38)], ids=lambda lv: f"{lv.kind}{lv.vertices}")
+def test_wide_diagrams_are_drawn_closer(lev):
+    # common practice (a diagram is its set partition): past 20 vertices a row no longer fits 80
+    # columns 4 apart; the picture is drawn 3 or 2 columns apart, labelled at 1, 5, 10, ...
+    import random
+
+    from engine.algebras.bases import count, unrank
+
+    r, rng = lev.vertices, random.Random(lev.vertices)
+    for _ in range(40):
+        d = unrank(lev, rng.randrange(count(lev)))
+        lines = draw(d, r)
+        assert all(len(line) <= 80 for line in lines)
+        assert components_in_picture(lines, r) == {frozenset(block) for block in d}
+        assert lines[0].split() == ["1"] + [str(i) for i in range(5, r + 1, 5)]
+        assert lines[-1].split() == ["1'"] + [f"{i}'" for i in range(5, r + 1, 5)]
+    assert VERTEX in "".join(draw(d, r, width=4 * r + 4))  # wide enough: 4 apart, every vertex labelled
+    assert draw(d, r, width=4 * r + 4)[0].split() == [str(i) for i in range(1, r + 1)]

@@ -63,7 +63,7 @@ def run_diagrams(args: argparse.Namespace) -> int:
                              args.exact))
         if args.draw or args.tikz:
             d = parse_diagram(entry["diagram"], level.vertices)
-            lines = draw(d, level.vertices) if args.draw else []
+            lines = draw(d, level.vertices, max(fit - width - 2, 30)) if args.draw else []
             if args.tikz:
                 lines += tikz(d, level.vertices).splitlines()
             for line in lines:

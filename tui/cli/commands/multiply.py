@@ -52,7 +52,9 @@ def run_multiply(args: argparse.Namespace) -> int:
     out.write(f"{level.name} (parameter {where}{basis}): {len(result)} term{'s' if len(result) != 1 else ''}\n")
     out.write(format_element(result, level) + "\n")
     if args.draw:
+        from tui.cli.fit import output_width
+
         for d, _ in ordered(result, level):
-            out.raw("\n" + "\n".join(draw(d, level.vertices)) + "\n")
+            out.raw("\n" + "\n".join(draw(d, level.vertices, output_width())) + "\n")
     out.flush()
     return 0
