@@ -10,8 +10,8 @@ one straight line and needs no lane.
 
 Top vertex i and bottom vertex i' share a column when the lanes can be stacked so that every top
 vertical ends above every bottom vertical of the same column (an order of the lanes, found by a
-topological sort); when no such order exists (e.g. a transposition) the bottom row is drawn two
-columns to the right, so no two verticals ever share a column.  Lanes with disjoint spans share a
+topological sort); when no such order exists (e.g. a transposition) the bottom row is drawn half
+the spacing to the right, so no two verticals ever share a column.  Lanes with disjoint spans share a
 row.  Vertices are SPACING columns apart; a diagram too wide for ``width`` columns so is drawn
 closer (COMPACT spacings, then only vertices 1, 5, 10, ... labelled), and past that it is listed
 block by block instead.
@@ -84,7 +84,8 @@ def draw(d: Blocks, r: int, width: int = 80) -> list[str]:
     """The diagram as lines of text (box characters); a list of blocks when wider than ``width``."""
     if r == 0:
         return ["{} (the empty diagram)"]
-    aligned = _layout(d, r, 0, SPACING) is not None
+    found = _layout(d, r, 0, SPACING)  # None: no aligned layout at any spacing
+    aligned = found is not None
     for spacing in (SPACING,) + COMPACT:
         shift = 0 if aligned else spacing // 2
         total_width = spacing * (r - 1) + 2 + shift + 2
@@ -92,7 +93,8 @@ def draw(d: Blocks, r: int, width: int = 80) -> list[str]:
             break
     else:
         return _listed(d, r, width)
-    found = _layout(d, r, shift, spacing)
+    if not aligned or spacing != SPACING:
+        found = _layout(d, r, shift, spacing)
     assert found is not None
     column, lane, lanes = found
     height = lanes + 6  # labels, vertices, spacer, lanes, spacer, vertices, labels

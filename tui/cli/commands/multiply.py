@@ -54,7 +54,8 @@ def run_multiply(args: argparse.Namespace) -> int:
     if args.draw:
         from tui.cli.fit import output_width
 
+        fit = output_width()
         for d, _ in ordered(result, level):
-            out.raw("\n" + "\n".join(draw(d, level.vertices, output_width())) + "\n")
+            out.raw("\n" + "\n".join(draw(d, level.vertices, fit)) + "\n")
     out.flush()
     return 0
