@@ -89,3 +89,30 @@ async def test_details_show_the_nodes_cell_module() -> None:
         assert app.state.node == (3,)
         assert "cell module () of P_3(3), dimension 5" in " ".join(details.split())
         assert "rank of its Gram form at x = 3: 5 = m ✓" in " ".join(details.split())
+
+
+async def test_the_drawing_follows_the_terminal_width() -> None:
+    # P_21(30): 21 strands are drawn 4 columns apart when there is room (160 columns), closer
+    # together at 80 columns; a resize draws the shown diagram and the product again
+    app = app_on("symmetric:n=30", search_faithful=False)
+    async with app.run_test(size=(80, 24)) as pilot:
+        await settle(pilot)
+        await go_to_level(pilot, "21")
+        await pilot.press("a")
+        await settle(pilot)
+        assert isinstance(app.screen, AlgebraView)
+        await pilot.press("1", "2")
+
+        def widest(widget_id: str) -> int:  # the drawing's lines: after the diagram's (the product's) notation
+            skip = 2 if widget_id == "#algebra-product" else 1
+            return max(len(line) for line in text(app, widget_id).splitlines()[skip:])
+
+        narrow = widest("#algebra-diagram"), widest("#algebra-product")
+        assert max(narrow) <= 80 - 6
+        await pilot.resize_terminal(160, 48)
+        await settle(pilot)
+        wide = widest("#algebra-diagram"), widest("#algebra-product")
+        assert wide[0] > narrow[0] and wide[1] > narrow[1] and max(wide) <= 160 - 6
+        await pilot.resize_terminal(80, 24)
+        await settle(pilot)
+        assert (widest("#algebra-diagram"), widest("#algebra-product")) == narrow

@@ -117,6 +117,13 @@ class AlgebraView(ModalScreen[None]):
         self._show_diagram()
         self._show_product()
 
+    def on_resize(self) -> None:
+        # the drawings are laid out for a width (strands 4, 3 or 2 columns apart, or listed):
+        # drawn again when the terminal's width changes it
+        if self._width() != self.drawn_width:
+            self._show_diagram()
+            self._show_product()
+
     # ----- drawing ----------------------------------------------------------------------------------
     def _summary_lines(self) -> list[str]:
         a = self.algebra
@@ -134,6 +141,9 @@ class AlgebraView(ModalScreen[None]):
     def _width(self) -> int:
         return max(30, self.size.width - 6)
 
+    #: the width the shown drawings were laid out for
+    drawn_width = 0
+
     def _show_diagram(self) -> None:
         from engine.algebras.bases import unrank
         from engine.algebras.diagrams import format_diagram
@@ -145,6 +155,7 @@ class AlgebraView(ModalScreen[None]):
             return
         d = unrank(a, self.position)
         self.shown = d
+        self.drawn_width = self._width()
         lines = [f"diagram {self.position:,} of 0..{a.dimension - 1:,}: {format_diagram(d, a.vertices)}"]
         lines += ["  " + line for line in draw(d, a.vertices, self._width())]
         self.query_one("#algebra-diagram", Static).update(Text("\n".join(lines)))
