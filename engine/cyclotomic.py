@@ -159,7 +159,11 @@ class Cyc:
         value = self.rational()
         if value is not None:
             return str(value)
-        return str(self.to_sympy())
+        # the form held and the canonical remainder modulo Φ_n give the same number: the shorter
+        # text is shown
+        n, coeffs = self.reduce()
+        reduced = Cyc(n, dict(enumerate(coeffs)))
+        return min(trigonometric_text(self), trigonometric_text(reduced), key=len)
 
     __repr__ = __str__
 
@@ -272,3 +276,87 @@ def sqrt_rational(q: Fraction) -> Cyc:
             f //= p
         p += 1
     return value
+
+
+# ----- text -----------------------------------------------------------------------------------
+_Q = Fraction
+#: cos(aπ) for the rational a in [0, 1] where it is rational (by Niven's theorem, Niven,
+#: *Irrational Numbers*, 1956, Cor. 3.12, these are all) or a rational plus a rational multiple
+#: of one square root (the regular polygons with 4, 5, 6, 8, 10 and 12 sides; common practice):
+#: a → (rational part, radicand, coefficient of its square root)
+_COS = {_Q(0): (_Q(1), 0, _Q(0)), _Q(1, 3): (_Q(1, 2), 0, _Q(0)), _Q(1, 2): (_Q(0), 0, _Q(0)),
+        _Q(2, 3): (_Q(-1, 2), 0, _Q(0)), _Q(1): (_Q(-1), 0, _Q(0)),
+        _Q(1, 4): (_Q(0), 2, _Q(1, 2)), _Q(3, 4): (_Q(0), 2, _Q(-1, 2)),
+        _Q(1, 6): (_Q(0), 3, _Q(1, 2)), _Q(5, 6): (_Q(0), 3, _Q(-1, 2)),
+        _Q(1, 5): (_Q(1, 4), 5, _Q(1, 4)), _Q(2, 5): (_Q(-1, 4), 5, _Q(1, 4)),
+        _Q(3, 5): (_Q(1, 4), 5, _Q(-1, 4)), _Q(4, 5): (_Q(-1, 4), 5, _Q(-1, 4))}
+#: sin(aπ) = cos((1/2 − a)π) for 0 < a < 1, where that is in ``_COS``
+_SIN = {a: _COS[abs(_Q(1, 2) - a)] for a in (_Q(1, 6), _Q(1, 4), _Q(1, 3), _Q(1, 2), _Q(2, 3), _Q(3, 4), _Q(5, 6))}
+
+
+def trigonometric_text(x: Cyc) -> str:
+    """``x`` as a real part and an imaginary part, each a rational plus rational multiples of
+    square roots and of cos(aπ) or sin(aπ) with 0 < a < 1 rational, in plain ASCII
+    (``-1/4 + sqrt(5)/4``, ``-1/2 + i*sqrt(3)/2``, ``cos(2*pi/7)``), so that it pastes into a
+    computer algebra system.  Exact, from ζ_n^k + ζ_n^{−k} = 2·cos(2πk/n) and
+    ζ_n^k − ζ_n^{−k} = 2i·sin(2πk/n) (Euler's formula): a pair c·ζ^k + c'·ζ^{−k} is
+    (c + c')·cos(2πk/n) + i·(c − c')·sin(2πk/n); the cosines and sines of ``_COS`` and ``_SIN``
+    are written by their values.  The form depends on how ``x`` is written (the ζ_n^k are not
+    independent); ``Cyc.__str__`` shows the shorter of two."""
+    n, a = x.n, x.terms
+    zero = Fraction(0)
+    real: dict[Fraction, Fraction] = {}  # a → coefficient of cos(aπ)
+    imaginary: dict[Fraction, Fraction] = {}  # a → coefficient of sin(aπ)
+    for k in range(n // 2 + 1):
+        c, c_ = a.get(k, zero), a.get((n - k) % n, zero)
+        if k == 0 or 2 * k == n:  # ζ^0 = 1 and ζ^{n/2} = −1 stand alone
+            real[Fraction(2 * k, n)] = c
+            continue
+        angle = Fraction(2 * k, n)
+        real[angle] = c + c_
+        imaginary[angle] = c - c_
+    real_text = _sum_text(real, _COS, "cos")
+    imaginary_text = _sum_text(imaginary, _SIN, "sin", unit="i")
+    if imaginary_text == "0":
+        return real_text
+    if real_text == "0":
+        return imaginary_text
+    if imaginary_text.startswith("-"):
+        return f"{real_text} - {imaginary_text[1:]}"
+    return f"{real_text} + {imaginary_text}"
+
+
+def _sum_text(terms: dict[Fraction, Fraction], known: dict, function: str, unit: str = "") -> str:
+    """unit·Σ c·function(aπ) over ``terms`` (a → c), the values in ``known`` written out: a
+    rational, then square roots by radicand, then the other terms by angle."""
+    constant = Fraction(0)
+    roots: dict[int, Fraction] = {}
+    rest: dict[Fraction, Fraction] = {}
+    for angle, c in terms.items():
+        if not c:
+            continue
+        if angle in known:
+            q, radicand, r = known[angle]
+            constant += c * q
+            if r:
+                roots[radicand] = roots.get(radicand, Fraction(0)) + c * r
+        else:
+            rest[angle] = c
+    bodies = ([(constant, "")] if constant else []) + [(roots[m], f"sqrt({m})") for m in sorted(roots) if roots[m]]
+    for angle in sorted(rest):
+        p, q = angle.numerator, angle.denominator
+        top = "pi" if p == 1 else f"{p}*pi"
+        bodies.append((rest[angle], f"{function}({top if q == 1 else f'{top}/{q}'})"))
+    if not bodies:
+        return "0"
+    parts = []
+    for c, body in bodies:
+        if unit and len(bodies) == 1:  # i times a single term: the unit joins the term
+            body = f"{unit}*{body}" if body else unit
+        m, d = abs(c).numerator, abs(c).denominator
+        text = body if m == 1 and body else f"{m}*{body}" if body else str(m)
+        parts.append((c < 0, text + ("" if d == 1 else f"/{d}")))
+    text = ("-" if parts[0][0] else "") + parts[0][1]
+    for negative, part in parts[1:]:
+        text += (" - " if negative else " + ") + part
+    return text if not unit or len(bodies) == 1 else f"{unit}*({text})"

@@ -30,14 +30,17 @@ class EigenSum:
         return total
 
     def text(self) -> str:
-        parts = []
+        out = ""
         for base, coefficient in self.terms:
             b = _shown(base)
             b = b if _plain(b) and not b.startswith("-") else f"({b})"
             c = _shown(coefficient)
+            join = " + "
+            if out and c.startswith("-"):  # a later term with a leading minus: − and the negated coefficient
+                join, c = " − ", _shown(-coefficient)
             c = "" if c == "1" else (c if _plain(c) and "/" not in c else f"({c})") + "·"
-            parts.append(f"{c}{b}^k")
-        return " + ".join(parts).replace("+ (-", "− (").replace("+ -", "− ") or "0"
+            out += (join if out else "") + f"{c}{b}^k"
+        return out or "0"
 
 
 def _shown(x) -> str:

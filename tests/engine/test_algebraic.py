@@ -68,3 +68,64 @@ def test_cyclotomic_reduction_agrees_with_sympy():
         while mine and mine[-1] == 0:
             mine.pop()
         assert mine == theirs, n
+
+
+# ----- the text of a cyclotomic number (engine.cyclotomic.trigonometric_text) ---------------------
+from fractions import Fraction  # noqa: E402
+import subprocess  # noqa: E402
+import sys  # noqa: E402
+
+from hypothesis import given, settings, strategies as st  # noqa: E402
+
+from engine.cyclotomic import Cyc  # noqa: E402
+
+
+def _from_text(text: str):
+    # sympy reads the text as it is printed: i is the imaginary unit, the rest is sympy's syntax
+    return sympy.parse_expr(text, local_dict={"i": sympy.I})
+
+
+@st.composite
+def cyclotomic(draw):
+    n = draw(st.integers(1, 24))
+    terms = draw(st.dictionaries(st.integers(0, n - 1), st.fractions(min_value=-5, max_value=5, max_denominator=6),
+                                 max_size=6))
+    return Cyc(n, terms)
+
+
+@settings(max_examples=300, deadline=None)
+@given(cyclotomic())
+def test_the_text_is_the_number(x):
+    # sympy's value of the printed text equals sympy's value of Σ c_k e^{2πik/n} to 40 digits; a
+    # text without cos or sin is also read back exactly by our own reader
+    text = str(x)
+    assert "exp" not in text and "I" not in text
+    ours = complex(sympy.N(_from_text(text), 40))
+    reference = complex(sympy.N(x.to_sympy(), 40))
+    assert abs(ours - reference) < 1e-25
+    if "cos" not in text and "sin" not in text:
+        assert parse_number(text) == x
+
+
+@pytest.mark.parametrize("text, shown", [
+    # 2·cos(2π/5) = (√5 − 1)/2 and 2·cos(4π/5) = −(1 + √5)/2 (from memory: the regular pentagon)
+    ("unity(5)+unity(5,4)", "-1/2 + sqrt(5)/2"),
+    ("unity(5,2)+unity(5,3)", "-1/2 - sqrt(5)/2"),
+    # ζ_3 = −1/2 + i·√3/2, ζ_8 = (1 + i)/√2, ζ_4 = i (common practice)
+    ("unity(3)", "-1/2 + i*sqrt(3)/2"),
+    ("unity(8)", "sqrt(2)/2 + i*sqrt(2)/2"),
+    ("unity(4)", "i"),
+    ("-3*unity(4)/2", "-3*i/2"),
+    # 2·cos(2π/7) has degree 3: no square root writes it
+    ("unity(7)+unity(7,6)", "2*cos(2*pi/7)"),
+])
+def test_familiar_values_are_written_by_square_roots(text, shown):
+    assert str(parse_number(text)) == shown
+
+
+def test_printing_a_number_does_not_import_sympy():
+    code = ("import sys; from engine.algebraic import parse_number; "
+            "print(parse_number('unity(7)+unity(7,3)')); assert 'sympy' not in sys.modules")
+    done = subprocess.run([sys.executable, "-c", code], capture_output=True, text=True, check=False)
+    assert done.returncode == 0, done.stderr
+    assert "cos(2*pi/7)" in done.stdout

@@ -136,6 +136,26 @@ def test_sum_over_characters_equals_the_path_counts(spec, label):
     assert [exact(form.value(k)) for k in range(14)] == [int(row[i]) for row in whole]
 
 
+@pytest.mark.parametrize("spec,label", [("characters:group=dihedral(5),module=r1", "r2"),
+                                        ("characters:group=dihedral(5),module=r1", "e"),
+                                        ("characters:group=symmetric(5),module=(4,1)", "(3,1,1)")])
+def test_the_printed_sum_over_characters_is_the_path_counts(spec, label):
+    # the text as printed, read by sympy (· for *, − for -, ^ for **), gives the multiplicities
+    # of sympy's matrix powers at k = 0..13 (D_5's bases are (−1 ± √5)/2: signs in front of
+    # sums of square roots)
+    import sympy
+
+    tower = parse_spec(spec)
+    view = finite_view(tower, "test")
+    whole, _ = _sympy_levels(view, 14)
+    text = eigen_sum(tower, label, view.period).text()
+    expression = sympy.parse_expr(text.replace("·", "*").replace("−", "-").replace("^", "**"),
+                                  local_dict={"i": sympy.I, "k": sympy.Symbol("k")})
+    i = view.labels.index(label)
+    for k in range(14):
+        assert sympy.simplify(sympy.expand(expression.subs("k", k)) - int(whole[k][i])) == 0  # exactly
+
+
 def test_s4_sum_over_characters_text():
     # hand computation from the S_4 character table: (2,2) on (3,1): χ_V = 3, 1, −1, 0, −1
     tower = parse_spec("characters:group=symmetric(4),module=(3,1)")
