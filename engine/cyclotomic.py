@@ -300,8 +300,9 @@ def trigonometric_text(x: Cyc) -> str:
     (``-1/4 + sqrt(5)/4``, ``-1/2 + i*sqrt(3)/2``, ``cos(2*pi/7)``), so that it pastes into a
     computer algebra system.  Exact, from ζ_n^k + ζ_n^{−k} = 2·cos(2πk/n) and
     ζ_n^k − ζ_n^{−k} = 2i·sin(2πk/n) (Euler's formula): a pair c·ζ^k + c'·ζ^{−k} is
-    (c + c')·cos(2πk/n) + i·(c − c')·sin(2πk/n); the cosines and sines of ``_COS`` and ``_SIN``
-    are written by their values.  The form depends on how ``x`` is written (the ζ_n^k are not
+    (c + c')·cos(2πk/n) + i·(c − c')·sin(2πk/n).  A part that is rational or of degree 2 over Q
+    (a Gauss sum, the golden ratio) is written a + b·sqrt(m) as a whole; otherwise the cosines
+    and sines of ``_COS`` and ``_SIN`` are written by their values.  The form depends on how ``x`` is written (the ζ_n^k are not
     independent); ``Cyc.__str__`` shows the shorter of two."""
     n, a = x.n, x.terms
     zero = Fraction(0)
@@ -315,8 +316,11 @@ def trigonometric_text(x: Cyc) -> str:
         angle = Fraction(2 * k, n)
         real[angle] = c + c_
         imaginary[angle] = c - c_
-    real_text = _sum_text(real, _COS, "cos")
-    imaginary_text = _sum_text(imaginary, _SIN, "sin", unit="i")
+    conjugate = x.conjugate()
+    real_part = (x + conjugate) * Fraction(1, 2)
+    imaginary_part = (x - conjugate) * Cyc(4, {3: Fraction(1, 2)})  # (x − x̄)/(2i)
+    real_text = _closed_text(real_part) or _sum_text(real, _COS, "cos")
+    imaginary_text = _closed_text(imaginary_part, unit="i") or _sum_text(imaginary, _SIN, "sin", unit="i")
     if imaginary_text == "0":
         return real_text
     if real_text == "0":
@@ -324,6 +328,64 @@ def trigonometric_text(x: Cyc) -> str:
     if imaginary_text.startswith("-"):
         return f"{real_text} - {imaginary_text[1:]}"
     return f"{real_text} + {imaginary_text}"
+
+
+def _quadratic(y: Cyc) -> tuple[Fraction, Fraction, int] | None:
+    """(a, b, m) with y = a + b·√m, m > 1 squarefree, for a real y of degree 2 over Q; None for
+    any other y.  y² = p + q·y is solved on the canonical coordinates (``reduce``); then
+    y = q/2 ± √(q²/4 + p), the sign read from y's value in floating point (the two roots lie
+    2|b|√m apart)."""
+    n, v = y.reduce()
+    _, w = (y * y).reduce()
+    j = next((i for i in range(1, len(v)) if v[i]), None)
+    if j is None:
+        return None
+    w = w + (Fraction(0),) * (len(v) - len(w))
+    q = w[j] / v[j] if j < len(w) else Fraction(0)
+    rest = [c - q * d for c, d in zip(w, v)] + list(w[len(v):])
+    if any(rest[1:]):
+        return None
+    disc = q * q / 4 + rest[0]
+    product = disc.numerator * disc.denominator
+    if disc <= 0 or product > 10 ** 12:
+        return None
+    root, m = _squarefree_split(product)
+    if m == 1:
+        return None
+    b = Fraction(root, disc.denominator)  # √disc = b·√m
+    from cmath import exp, pi
+
+    value = sum(float(c) * exp(2j * pi * k / y.n) for k, c in y.terms.items()).real
+    if abs(value - q / 2) < 1e-9 * float(b * b * m) ** 0.5:
+        return None
+    return q / 2, (b if value > q / 2 else -b), m
+
+
+def _closed_text(y: Cyc, unit: str = "") -> str | None:
+    """unit·y for a real y that is rational or of degree 2 (``_quadratic``); None otherwise."""
+    r = y.rational()
+    if r is not None:
+        return _format([(r, "")], unit) if r else "0"
+    found = _quadratic(y)
+    if found is None:
+        return None
+    a, b, m = found
+    return _format(([(a, "")] if a else []) + [(b, f"sqrt({m})")], unit)
+
+
+def _format(bodies: list[tuple[Fraction, str]], unit: str) -> str:
+    """unit·Σ c·body, a body "" for a rational term; signs folded into the joins."""
+    parts = []
+    for c, body in bodies:
+        if unit and len(bodies) == 1:  # i times a single term: the unit joins the term
+            body = f"{unit}*{body}" if body else unit
+        m, d = abs(c).numerator, abs(c).denominator
+        text = body if m == 1 and body else f"{m}*{body}" if body else str(m)
+        parts.append((c < 0, text + ("" if d == 1 else f"/{d}")))
+    text = ("-" if parts[0][0] else "") + parts[0][1]
+    for negative, part in parts[1:]:
+        text += (" - " if negative else " + ") + part
+    return text if not unit or len(bodies) == 1 else f"{unit}*({text})"
 
 
 def _sum_text(terms: dict[Fraction, Fraction], known: dict, function: str, unit: str = "") -> str:
@@ -347,16 +409,4 @@ def _sum_text(terms: dict[Fraction, Fraction], known: dict, function: str, unit:
         p, q = angle.numerator, angle.denominator
         top = "pi" if p == 1 else f"{p}*pi"
         bodies.append((rest[angle], f"{function}({top if q == 1 else f'{top}/{q}'})"))
-    if not bodies:
-        return "0"
-    parts = []
-    for c, body in bodies:
-        if unit and len(bodies) == 1:  # i times a single term: the unit joins the term
-            body = f"{unit}*{body}" if body else unit
-        m, d = abs(c).numerator, abs(c).denominator
-        text = body if m == 1 and body else f"{m}*{body}" if body else str(m)
-        parts.append((c < 0, text + ("" if d == 1 else f"/{d}")))
-    text = ("-" if parts[0][0] else "") + parts[0][1]
-    for negative, part in parts[1:]:
-        text += (" - " if negative else " + ") + part
-    return text if not unit or len(bodies) == 1 else f"{unit}*({text})"
+    return _format(bodies, unit) if bodies else "0"

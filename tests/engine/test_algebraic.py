@@ -118,6 +118,10 @@ def test_the_text_is_the_number(x):
     ("-3*unity(4)/2", "-3*i/2"),
     # 2·cos(2π/7) has degree 3: no square root writes it
     ("unity(7)+unity(7,6)", "2*cos(2*pi/7)"),
+    # the sums of ζ_p^a over the quadratic residues a are (−1 + g_p)/2 with the Gauss sum
+    # g_p = √p for p ≡ 1 (mod 4), i·√p for p ≡ 3 (mod 4) (Ireland and Rosen, Prop. 6.3.2)
+    ("unity(7)+unity(7,2)+unity(7,4)", "-1/2 + i*sqrt(7)/2"),
+    ("unity(13)+unity(13,3)+unity(13,4)+unity(13,9)+unity(13,10)+unity(13,12)", "-1/2 + sqrt(13)/2"),
 ])
 def test_familiar_values_are_written_by_square_roots(text, shown):
     assert str(parse_number(text)) == shown
@@ -129,3 +133,17 @@ def test_printing_a_number_does_not_import_sympy():
     done = subprocess.run([sys.executable, "-c", code], capture_output=True, text=True, check=False)
     assert done.returncode == 0, done.stderr
     assert "cos(2*pi/7)" in done.stdout
+
+
+@settings(max_examples=200, deadline=None)
+@given(st.fractions(min_value=-9, max_value=9, max_denominator=7), st.fractions(min_value=-9, max_value=9, max_denominator=7),
+       st.integers(-60, 60).filter(lambda m: m not in (0, 1)), st.fractions(min_value=-3, max_value=3, max_denominator=5))
+def test_a_quadratic_number_is_written_by_its_square_root(a, b, m, c):
+    # a + b·√m + c·i, √m written as a cyclotomic number by Gauss sums (engine.cyclotomic.sqrt_rational):
+    # the text has no cosine and our reader gives back the same number exactly
+    from engine.cyclotomic import sqrt_rational
+
+    x = Cyc.of(a) + sqrt_rational(Fraction(m)) * b + Cyc.unity(4) * c
+    text = str(x)
+    assert "cos" not in text and "sin" not in text, text
+    assert parse_number(text) == x
