@@ -190,7 +190,9 @@ def test_multiplicities_are_the_rows_of_matrix_powers(rows):
     # *Coxeter Graphs and Towers of Algebras*, 1989, 2.1), checked against python-flint's exact
     # matrix powers; the counts mix 1 with small repeated counts and counts kept with their value
     # (past REPEAT_UP_TO), and the one passage is pulled again and again (its parents dropped
-    # after the first pull and rebuilt at the second)
+    # after the first pull and rebuilt at the second); between the two, the edges of every node,
+    # on the level or not, are asked for (learned while the parents side is gone) and must be the
+    # matrix's rows
     from flint import fmpz_mat
 
     tower = _matrix_tower(rows)
@@ -202,4 +204,8 @@ def test_multiplicities_are_the_rows_of_matrix_powers(rows):
     for k in range(7):
         expected = {labels[j]: int(power[0, j]) for j in range(len(labels)) if power[0, j] != 0}
         assert d.level(k) == expected
+        if k == 1:
+            for i, label in enumerate(labels):
+                row = tower.pattern[0].matrix[i]
+                assert dict(d.children(k, label)) == {labels[j]: e for j, e in enumerate(row) if e}
         power = power * m

@@ -126,14 +126,19 @@ def test_deep_jumps_equal_the_symmetric_closed_form(n):
                                         ("symmetric:n=5,module=(5)+(4,1)", "(3,2)")])
 def test_sum_over_characters_equals_the_path_counts(spec, label):
     # Serre §2.3: m_i(k) = (1/|G|) Σ_C |C| χ_V(C)^k conj χ_i(C); reference: sympy matrix powers
+    form, expected = _sum_over_characters(spec, label)
+    from engine.class_functions import exact
+
+    assert [exact(form.value(k)) for k in range(14)] == expected
+
+
+def _sum_over_characters(spec, label):
+    """The node's sum over characters and its multiplicities at k = 0..13 by sympy's matrix powers."""
     tower = parse_spec(spec)
     view = finite_view(tower, "test")
     whole, _ = _sympy_levels(view, 14)
-    form = eigen_sum(tower, label, view.period)
     i = view.labels.index(label)
-    from engine.class_functions import exact
-
-    assert [exact(form.value(k)) for k in range(14)] == [int(row[i]) for row in whole]
+    return eigen_sum(tower, label, view.period), [int(row[i]) for row in whole]
 
 
 @pytest.mark.parametrize("spec,label", [("characters:group=dihedral(5),module=r1", "r2"),
@@ -145,15 +150,11 @@ def test_the_printed_sum_over_characters_is_the_path_counts(spec, label):
     # sums of square roots)
     import sympy
 
-    tower = parse_spec(spec)
-    view = finite_view(tower, "test")
-    whole, _ = _sympy_levels(view, 14)
-    text = eigen_sum(tower, label, view.period).text()
-    expression = sympy.parse_expr(text.replace("·", "*").replace("−", "-").replace("^", "**"),
+    form, expected = _sum_over_characters(spec, label)
+    expression = sympy.parse_expr(form.text().replace("·", "*").replace("−", "-").replace("^", "**"),
                                   local_dict={"i": sympy.I, "k": sympy.Symbol("k")})
-    i = view.labels.index(label)
     for k in range(14):
-        assert sympy.simplify(sympy.expand(expression.subs("k", k)) - int(whole[k][i])) == 0  # exactly
+        assert sympy.simplify(sympy.expand(expression.subs("k", k)) - expected[k]) == 0  # exactly
 
 
 def test_s4_sum_over_characters_text():

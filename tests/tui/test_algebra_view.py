@@ -25,14 +25,18 @@ async def go_to_level(pilot, level: str) -> None:  # noqa: ANN001
     await settle(pilot)
 
 
+async def open_algebra_view(app, pilot, level: str) -> None:  # noqa: ANN001
+    await settle(pilot)
+    await go_to_level(pilot, level)
+    await pilot.press("a")
+    await settle(pilot)
+    assert isinstance(app.screen, AlgebraView)
+
+
 async def test_the_algebra_view_of_p3_at_3() -> None:
     app = app_on("symmetric:n=3", search_faithful=False)
     async with app.run_test(size=(80, 24)) as pilot:
-        await settle(pilot)
-        await go_to_level(pilot, "3")
-        await pilot.press("a")
-        await settle(pilot)
-        assert isinstance(app.screen, AlgebraView)
+        await open_algebra_view(app, pilot, "3")
         summary = text(app, "#algebra-summary")
         assert f"{int(bell(6))} basis diagrams" in summary and "parameter x = 3" in summary
         squares = sum(int(stirling(6, j)) for j in range(1, 4))
@@ -96,11 +100,7 @@ async def test_the_drawing_follows_the_terminal_width() -> None:
     # together at 80 columns; a resize draws the shown diagram and the product again
     app = app_on("symmetric:n=30", search_faithful=False)
     async with app.run_test(size=(80, 24)) as pilot:
-        await settle(pilot)
-        await go_to_level(pilot, "21")
-        await pilot.press("a")
-        await settle(pilot)
-        assert isinstance(app.screen, AlgebraView)
+        await open_algebra_view(app, pilot, "21")
         await pilot.press("1", "2")
 
         def widest(widget_id: str) -> int:  # the drawing's lines: after the diagram's (the product's) notation
