@@ -60,6 +60,15 @@ def test_text_output(run_cli):
     assert status == 0 and "3 recurrent configurations = |det C̃| ✓" in out
 
 
+def test_irrational_eigenvalues_are_printed_by_square_roots(run_json):
+    # D_5 on its 2-dimensional r1: χ(r^j)/2 = cos(2πj/5) = (−1 ± √5)/4 (the regular pentagon, from
+    # memory); C_7 on x1+x2+x4: the Gauss sum (−1 + i√7)/2 over 3 (Ireland and Rosen, Prop. 6.3.2)
+    values = [e["value"] for e in run_json("walk", "characters:group=dihedral(5),module=r1", "--steps", "1")["eigenvalues"]]
+    assert sorted(values) == sorted(["1", "-1/4 + sqrt(5)/4", "-1/4 - sqrt(5)/4", "0"])
+    values = [e["value"] for e in run_json("walk", "characters:group=cyclic(7),module=x1+x2+x4", "--steps", "1")["eigenvalues"]]
+    assert values.count("-1/6 + i*sqrt(7)/6") == 3 and values.count("-1/6 - i*sqrt(7)/6") == 3
+
+
 @pytest.mark.parametrize("args,words", [
     (["series", "general-linear:n=3", "--label", "(1)"], "no finite step matrix"),
     (["series", "su2:kind=icosahedral", "--label", "nope"], "is not a node"),
