@@ -159,11 +159,7 @@ class Cyc:
         value = self.rational()
         if value is not None:
             return str(value)
-        # the form held and the canonical remainder modulo Φ_n give the same number: the shorter
-        # text is shown
-        n, coeffs = self.reduce()
-        reduced = Cyc(n, dict(enumerate(coeffs)))
-        return min(trigonometric_text(self), trigonometric_text(reduced), key=len)
+        return trigonometric_text(self)
 
     __repr__ = __str__
 
@@ -301,26 +297,20 @@ def trigonometric_text(x: Cyc) -> str:
     computer algebra system.  Exact, from ζ_n^k + ζ_n^{−k} = 2·cos(2πk/n) and
     ζ_n^k − ζ_n^{−k} = 2i·sin(2πk/n) (Euler's formula): a pair c·ζ^k + c'·ζ^{−k} is
     (c + c')·cos(2πk/n) + i·(c − c')·sin(2πk/n).  A part that is rational or of degree 2 over Q
-    (a Gauss sum, the golden ratio) is written a + b·sqrt(m) as a whole; otherwise the cosines
-    and sines of ``_COS`` and ``_SIN`` are written by their values.  The form depends on how ``x`` is written (the ζ_n^k are not
-    independent); ``Cyc.__str__`` shows the shorter of two."""
-    n, a = x.n, x.terms
-    zero = Fraction(0)
-    real: dict[Fraction, Fraction] = {}  # a → coefficient of cos(aπ)
-    imaginary: dict[Fraction, Fraction] = {}  # a → coefficient of sin(aπ)
-    for k in range(n // 2 + 1):
-        c, c_ = a.get(k, zero), a.get((n - k) % n, zero)
-        if k == 0 or 2 * k == n:  # ζ^0 = 1 and ζ^{n/2} = −1 stand alone
-            real[Fraction(2 * k, n)] = c
-            continue
-        angle = Fraction(2 * k, n)
-        real[angle] = c + c_
-        imaginary[angle] = c - c_
+    (a Gauss sum, the golden ratio) is written a + b·sqrt(m) as a whole; any other part term by
+    term, the cosines and sines of ``_COS`` and ``_SIN`` by their values.  That form depends on
+    how ``x`` is written (the ζ_n^k are not independent): the shorter of the form held and the
+    canonical remainder modulo Φ_n is shown."""
     conjugate = x.conjugate()
-    real_part = (x + conjugate) * Fraction(1, 2)
-    imaginary_part = (x - conjugate) * Cyc(4, {3: Fraction(1, 2)})  # (x − x̄)/(2i)
-    real_text = _closed_text(real_part) or _sum_text(real, _COS, "cos")
-    imaginary_text = _closed_text(imaginary_part, unit="i") or _sum_text(imaginary, _SIN, "sin", unit="i")
+    real_text = _closed_text((x + conjugate) * Fraction(1, 2))
+    imaginary_text = _closed_text((x - conjugate) * Cyc(4, {3: Fraction(1, 2)}), unit="i")  # (x − x̄)/(2i)
+    if real_text is None or imaginary_text is None:
+        n, coeffs = x.reduce()
+        forms = [_term_texts(x), _term_texts(Cyc(n, dict(enumerate(coeffs))))]
+        if real_text is None:
+            real_text = min((f[0] for f in forms), key=len)
+        if imaginary_text is None:
+            imaginary_text = min((f[1] for f in forms), key=len)
     if imaginary_text == "0":
         return real_text
     if real_text == "0":
@@ -330,12 +320,28 @@ def trigonometric_text(x: Cyc) -> str:
     return f"{real_text} + {imaginary_text}"
 
 
+def _term_texts(x: Cyc) -> tuple[str, str]:
+    """The real part and i times the imaginary part of ``x`` term by term, as written."""
+    n, a = x.n, x.terms
+    zero = Fraction(0)
+    real: dict[Fraction, Fraction] = {}  # a → coefficient of cos(aπ)
+    imaginary: dict[Fraction, Fraction] = {}  # a → coefficient of sin(aπ)
+    for k in range(n // 2 + 1):
+        c, c_ = a.get(k, zero), a.get((n - k) % n, zero)
+        angle = Fraction(2 * k, n)
+        if k == 0 or 2 * k == n:  # ζ^0 = 1 and ζ^{n/2} = −1 stand alone
+            real[angle] = c
+        else:
+            real[angle], imaginary[angle] = c + c_, c - c_
+    return _sum_text(real, _COS, "cos"), _sum_text(imaginary, _SIN, "sin", unit="i")
+
+
 def _quadratic(y: Cyc) -> tuple[Fraction, Fraction, int] | None:
     """(a, b, m) with y = a + b·√m, m > 1 squarefree, for a real y of degree 2 over Q; None for
     any other y.  y² = p + q·y is solved on the canonical coordinates (``reduce``); then
     y = q/2 ± √(q²/4 + p), the sign read from y's value in floating point (the two roots lie
     2|b|√m apart)."""
-    n, v = y.reduce()
+    _, v = y.reduce()
     _, w = (y * y).reduce()
     j = next((i for i in range(1, len(v)) if v[i]), None)
     if j is None:

@@ -157,7 +157,7 @@ class AlgebraView(ModalScreen[None]):
         self.shown = d
         self.drawn_width = self._width()
         lines = [f"diagram {self.position:,} of 0..{a.dimension - 1:,}: {format_diagram(d, a.vertices)}"]
-        lines += ["  " + line for line in draw(d, a.vertices, self._width())]
+        lines += ["  " + line for line in draw(d, a.vertices, self.drawn_width)]
         self.query_one("#algebra-diagram", Static).update(Text("\n".join(lines)))
 
     def _show_product(self) -> None:
